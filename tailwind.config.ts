@@ -15,17 +15,17 @@ export default {
 				mono: ['"Fira Mono"', 'ui-monospace', 'monospace']
 			},
 			colors: {
-				paper: 'var(--tw-paper)',
-				panel: 'var(--tw-panel)',
-				ink: 'var(--tw-ink)',
-				muted: 'var(--tw-muted)',
-				rule: 'var(--tw-rule)',
-				accent: 'var(--tw-accent)',
-				'accent-ink': 'var(--tw-accent-ink)',
-				caution: 'var(--tw-caution)',
-				'caution-bg': 'var(--tw-caution-bg)',
-				danger: 'var(--tw-danger)',
-				'danger-bg': 'var(--tw-danger-bg)'
+				paper: 'var(--tc-paper)',
+				panel: 'var(--tc-panel)',
+				ink: 'var(--tc-ink)',
+				muted: 'var(--tc-muted)',
+				rule: 'var(--tc-rule)',
+				accent: 'var(--tc-accent)',
+				'accent-ink': 'var(--tc-accent-ink)',
+				caution: 'var(--tc-caution)',
+				'caution-bg': 'var(--tc-caution-bg)',
+				danger: 'var(--tc-danger)',
+				'danger-bg': 'var(--tc-danger-bg)'
 			}
 		}
 	}

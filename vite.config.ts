@@ -7,6 +7,8 @@ export default defineConfig({
 	test: {
 		include: ['src/**/*.test.ts'],
 		environment: 'node',
+		// Each test file gets its own private in-memory database.
+		env: { DATABASE_PATH: ':memory:' },
 		// Server tests open their own in-memory databases; keep runs isolated.
 		pool: 'forks'
 	}

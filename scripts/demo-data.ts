@@ -1,0 +1,57 @@
+/**
+ * The invented demo scenario: a small group at the fictional Kestrel Ridge Observatory
+ * working through the fictional planetary nebula "Lantern Nebula" (KRO-PN 7) and the
+ * fictional chemically peculiar star "Vireo's Star" (KRO-CP 12). Every name, number and
+ * note here is made up for the demo; none is catalogue data.
+ */
+export const DEMO_PASSWORD = 'spectra-demo-2026';
+
+export const demoUsers = [
+	{ name: 'Imre Valdšteinová', email: 'imre@kestrel.example', role: 'owner' as const },
+	{ name: 'Tomasz Achterberg', email: 'tomasz@kestrel.example', role: 'editor' as const },
+	{ name: 'Nalini Osei-Brandt', email: 'nalini@kestrel.example', role: 'viewer' as const }
+];
+
+export const demoProject = {
+	name: 'Lantern Nebula & Vireo’s Star',
+	description:
+		'Line identifications for the fictional planetary nebula KRO-PN 7 and the chemically peculiar star KRO-CP 12 (demo data, invented).'
+};
+
+export const demoShelf = [
+	{
+		title: 'Nebular doubly ionized oxygen — ground configuration',
+		species: 'O III',
+		notation: '1s2 2s2 2p2',
+		tags: ['nebula', 'forbidden lines'],
+		notes: 'Forbidden lines inside the ground configuration dominate the nebula’s spectrum. Level energies entered here are invented for the demo.'
+	},
+	{
+		title: 'Singly ionized nitrogen, auroral and nebular lines',
+		species: 'N II',
+		notation: '[He] 2s2 2p2',
+		tags: ['nebula', 'forbidden lines'],
+		notes: 'Same term structure as the O III entry; compare the splittings once energies are in.'
+	},
+	{
+		title: 'Iron II ground configuration for the peculiar star',
+		species: 'Fe II',
+		notation: '[Ar] 3d6 4s',
+		tags: ['peculiar star', 'iron group'],
+		notes: 'Many levels; the team is checking which sextet and quartet levels explain the strongest absorption features.'
+	},
+	{
+		title: 'Doubly ionized neodymium',
+		species: 'Nd III',
+		notation: '[Xe] 4f4',
+		tags: ['peculiar star', 'lanthanide'],
+		notes: 'Disputed: is the ground level really the Hund’s-rule level here? Tomasz thinks so, Imre wants observed levels first.'
+	},
+	{
+		title: 'Excited neutral neon, two open subshells',
+		species: 'Ne I',
+		notation: '1s2 2s2 2p5 3p',
+		tags: ['coupling', 'teaching set'],
+		notes: 'Good test case for the Coupling bridge: close to neither pure LS nor pure jj.'
+	}
+];

@@ -1,0 +1,30 @@
+// Seeds the invented demo scenario (scripts/demo-data.ts). Safe to run twice: it stops
+// when the demo owner already exists. Reset: delete data/termwright.db* and run again.
+import { eq } from 'drizzle-orm';
+import { db } from '../src/lib/server/db/index';
+import { users } from '../src/lib/server/db/schema';
+import { signUp } from '../src/lib/server/services/users';
+import { addMember, createProject } from '../src/lib/server/services/projects';
+import { createEntry } from '../src/lib/server/services/shelf';
+import { DEMO_PASSWORD, demoProject, demoShelf, demoUsers } from './demo-data';
+
+async function main() {
+	if (db.select().from(users).where(eq(users.email, demoUsers[0].email)).get()) {
+		console.log('Demo data is already there; nothing to do.');
+	} else {
+		const [owner, ...others] = demoUsers;
+		const ownerActor = await signUp({ name: owner.name, email: owner.email, password: DEMO_PASSWORD });
+		for (const u of others) await signUp({ name: u.name, email: u.email, password: DEMO_PASSWORD });
+		const project = createProject(ownerActor, demoProject);
+		for (const u of others) addMember(ownerActor, project.id, { email: u.email, role: u.role });
+		for (const entry of demoShelf) createEntry(ownerActor, project.id, entry);
+		console.log(`Seeded the demo project "${project.name}" with ${demoShelf.length} Shelf entries.`);
+	}
+	console.log('Demo accounts (password for all: ' + DEMO_PASSWORD + '):');
+	for (const u of demoUsers) console.log(`  ${u.email.padEnd(26)} project ${u.role}${u === demoUsers[0] ? ', site admin' : ''}`);
+}
+
+main().catch((e) => {
+	console.error(e);
+	process.exit(1);
+});

@@ -1,0 +1,121 @@
+/**
+ * Termwright's tables. One place for the whole schema; drizzle-kit generates the
+ * SQL migrations in drizzle/ from this file (`npm run db:generate`).
+ */
+import { sql } from 'drizzle-orm';
+import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+
+const now = sql`(unixepoch() * 1000)`;
+
+export const SITE_ROLES = ['admin', 'member'] as const;
+export type SiteRole = (typeof SITE_ROLES)[number];
+
+export const PROJECT_ROLES = ['viewer', 'editor', 'owner'] as const;
+export type ProjectRole = (typeof PROJECT_ROLES)[number];
+
+export const ASSIGNMENT_STATUSES = ['proposed', 'confirmed', 'disputed'] as const;
+export type AssignmentStatus = (typeof ASSIGNMENT_STATUSES)[number];
+
+export const users = sqliteTable('users', {
+	id: text('id').primaryKey(),
+	email: text('email').notNull().unique(),
+	name: text('name').notNull(),
+	passwordHash: text('password_hash').notNull(),
+	siteRole: text('site_role', { enum: SITE_ROLES }).notNull().default('member'),
+	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+});
+
+/** Lucia's session table: id, user_id, expires_at (seconds since the epoch). */
+export const sessions = sqliteTable(
+	'sessions',
+	{
+		id: text('id').primaryKey(),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		expiresAt: integer('expires_at').notNull()
+	},
+	(t) => [index('sessions_user_idx').on(t.userId)]
+);
+
+export const projects = sqliteTable('projects', {
+	id: text('id').primaryKey(),
+	name: text('name').notNull(),
+	description: text('description').notNull().default(''),
+	createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
+	updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+});
+
+export const memberships = sqliteTable(
+	'memberships',
+	{
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		role: text('role', { enum: PROJECT_ROLES }).notNull(),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [primaryKey({ columns: [t.projectId, t.userId] }), index('memberships_user_idx').on(t.userId)]
+);
+
+/** A saved configuration on a project's Shelf. `version` guards against stale edits. */
+export const shelfEntries = sqliteTable(
+	'shelf_entries',
+	{
+		id: text('id').primaryKey(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		title: text('title').notNull(),
+		species: text('species').notNull().default(''),
+		/** The notation exactly as the user typed it. */
+		notation: text('notation').notNull(),
+		notes: text('notes').notNull().default(''),
+		/** JSON array of tag strings. */
+		tags: text('tags', { mode: 'json' }).$type<string[]>().notNull().default([]),
+		version: integer('version').notNull().default(1),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('shelf_project_idx').on(t.projectId)]
+);
+
+/**
+ * A note on one level of a Shelf entry. `levelKey` names the level independently of
+ * sort order: "<term label>#<occurrence>|<J>", e.g. "2D#2|5/2".
+ */
+export const levelAnnotations = sqliteTable(
+	'level_annotations',
+	{
+		id: text('id').primaryKey(),
+		entryId: text('entry_id')
+			.notNull()
+			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		levelKey: text('level_key').notNull(),
+		/** Observed energy in cm⁻¹ above the ground level. */
+		observedEnergy: real('observed_energy'),
+		/** One-sigma uncertainty of the observed energy, cm⁻¹. */
+		uncertainty: real('uncertainty'),
+		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull().default('proposed'),
+		comment: text('comment').notNull().default(''),
+		version: integer('version').notNull().default(1),
+		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [uniqueIndex('annotation_entry_level_idx').on(t.entryId, t.levelKey)]
+);
+
+/** Mail that the app "sent": the local outbox used in development, demos and tests. */
+export const outbox = sqliteTable('outbox', {
+	id: integer('id').primaryKey({ autoIncrement: true }),
+	to: text('to').notNull(),
+	subject: text('subject').notNull(),
+	body: text('body').notNull(),
+	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+});

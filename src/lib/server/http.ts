@@ -1,0 +1,84 @@
+/**
+ * Glue between the service layer and SvelteKit: pages, form actions and JSON handlers.
+ */
+import { error, fail, json, redirect, type RequestEvent } from '@sveltejs/kit';
+import { ZodError } from 'zod';
+import type { Actor } from './access';
+import { ServiceError } from './errors';
+
+/** The signed-in user, or a redirect to the sign-in page that comes back here. */
+export function requireUser(event: RequestEvent): Actor {
+	const user = event.locals.user;
+	if (!user) {
+		const next = event.url.pathname + event.url.search;
+		redirect(303, `/signin?next=${encodeURIComponent(next)}`);
+	}
+	return user;
+}
+
+/** Runs a service call in a load function; service errors become SvelteKit errors. */
+export function forPage<T>(call: () => T): T {
+	try {
+		return call();
+	} catch (e) {
+		if (e instanceof ServiceError) error(e.status, e.message);
+		throw e;
+	}
+}
+
+/** What a failed form action returns to its page: the message, the field at fault, what was typed. */
+export type ActionFailureData = { message: string; field?: string; token?: string; [key: string]: unknown };
+
+/**
+ * Runs a service call in a form action; a service error becomes `fail(status, { message, field, ...echo })`,
+ * where `echo` is what the user typed, so the form can show it again.
+ */
+export async function forAction<T, E extends Record<string, unknown> = Record<never, never>>(
+	call: () => T | Promise<T>,
+	echo: E = {} as E
+) {
+	try {
+		return { ok: true as const, value: await call() };
+	} catch (e) {
+		if (e instanceof ServiceError) {
+			const data: ActionFailureData & E = { message: e.message, ...e.details, ...echo };
+			return { ok: false as const, failure: fail(e.status, data) };
+		}
+		throw e;
+	}
+}
+
+/** One JSON error shape for the whole API: `{ "error": { "message", ...details } }`. */
+export function jsonError(status: number, message: string, details: Record<string, unknown> = {}) {
+	return json({ error: { message, ...details } }, { status });
+}
+
+/** Wraps a JSON handler so every failure answers in the API's error shape. */
+export function api<E extends RequestEvent>(handler: (event: E) => Response | Promise<Response>) {
+	return async (event: E): Promise<Response> => {
+		try {
+			return await handler(event);
+		} catch (e) {
+			if (e instanceof ServiceError) return jsonError(e.status, e.message, e.details);
+			if (e instanceof ZodError) return jsonError(400, e.issues[0]?.message ?? 'Bad input');
+			throw e;
+		}
+	};
+}
+
+/** The API's actor: cookie session (set by hooks). */
+export function apiActor(event: RequestEvent): Actor {
+	if (!event.locals.user) throw new ServiceError(401, 'Sign in first (cookie session)');
+	return event.locals.user;
+}
+
+/** Reads a JSON body, refusing non-JSON and bodies over `maxBytes`. */
+export async function readJson(event: RequestEvent, maxBytes = 256 * 1024): Promise<unknown> {
+	const text = await event.request.text();
+	if (text.length > maxBytes) throw new ServiceError(413, `Request body is over ${maxBytes} bytes`);
+	try {
+		return JSON.parse(text);
+	} catch {
+		throw new ServiceError(400, 'Request body must be JSON');
+	}
+}

@@ -1,0 +1,127 @@
+/**
+ * Projects and their members. Each function checks the actor's role before it reads or writes.
+ */
+import { and, asc, eq, sql } from 'drizzle-orm';
+import { db } from '../db';
+import { memberships, projects, users, type ProjectRole } from '../db/schema';
+import { projectAccess, type Actor } from '../access';
+import { ServiceError, badRequest, conflict, notFound } from '../errors';
+import { newId } from '../ids';
+import { memberInputSchema, parseInput, projectInputSchema, projectPatchSchema, roleSchema } from '../validation';
+
+export function listProjects(actor: Actor) {
+	return db
+		.select({
+			id: projects.id,
+			name: projects.name,
+			description: projects.description,
+			role: memberships.role,
+			updatedAt: projects.updatedAt,
+			members: sql<number>`(select count(*) from memberships m where m.project_id = ${projects.id})`
+		})
+		.from(projects)
+		.innerJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, actor.id)))
+		.orderBy(asc(projects.name))
+		.all();
+}
+
+export function getProject(actor: Actor, projectId: string) {
+	const { project, role } = projectAccess(actor, projectId, 'viewer');
+	return { ...project, role };
+}
+
+export function createProject(actor: Actor, input: unknown) {
+	const data = parseInput(projectInputSchema, input);
+	const id = newId();
+	db.transaction((tx) => {
+		tx.insert(projects).values({ id, name: data.name, description: data.description, createdBy: actor.id }).run();
+		tx.insert(memberships).values({ projectId: id, userId: actor.id, role: 'owner' }).run();
+	});
+	return getProject(actor, id);
+}
+
+export function updateProject(actor: Actor, projectId: string, input: unknown) {
+	projectAccess(actor, projectId, 'owner');
+	const data = parseInput(projectPatchSchema, input);
+	db.update(projects)
+		.set({ ...data, updatedAt: new Date() })
+		.where(eq(projects.id, projectId))
+		.run();
+	return getProject(actor, projectId);
+}
+
+export function deleteProject(actor: Actor, projectId: string) {
+	projectAccess(actor, projectId, 'owner');
+	db.delete(projects).where(eq(projects.id, projectId)).run();
+}
+
+export function listMembers(actor: Actor, projectId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	return db
+		.select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, since: memberships.createdAt })
+		.from(memberships)
+		.innerJoin(users, eq(users.id, memberships.userId))
+		.where(eq(memberships.projectId, projectId))
+		.orderBy(asc(users.name))
+		.all();
+}
+
+/** Adds an existing user by e-mail. */
+export function addMember(actor: Actor, projectId: string, input: unknown) {
+	projectAccess(actor, projectId, 'owner');
+	const data = parseInput(memberInputSchema, input);
+	const user = db.select().from(users).where(eq(users.email, data.email)).get();
+	if (!user) throw badRequest(`No Termwright account uses ${data.email}; ask them to sign up first`, { field: 'email' });
+	const existing = db
+		.select()
+		.from(memberships)
+		.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, user.id)))
+		.get();
+	if (existing) throw conflict(`${user.name} is already a member (${existing.role})`, { field: 'email' });
+	db.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
+	return { userId: user.id, name: user.name, email: user.email, role: data.role };
+}
+
+function ownerCount(projectId: string): number {
+	return db
+		.select({ n: sql<number>`count(*)` })
+		.from(memberships)
+		.where(and(eq(memberships.projectId, projectId), eq(memberships.role, 'owner')))
+		.get()!.n;
+}
+
+function membershipOf(projectId: string, userId: string) {
+	const m = db
+		.select()
+		.from(memberships)
+		.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
+		.get();
+	if (!m) throw notFound('That person is not a member of this project');
+	return m;
+}
+
+export function changeMemberRole(actor: Actor, projectId: string, userId: string, role: unknown) {
+	projectAccess(actor, projectId, 'owner');
+	const newRole: ProjectRole = parseInput(roleSchema, role);
+	db.transaction((tx) => {
+		const m = membershipOf(projectId, userId);
+		if (m.role === 'owner' && newRole !== 'owner' && ownerCount(projectId) === 1)
+			throw new ServiceError(409, 'A project needs at least one owner; make someone else owner first');
+		tx.update(memberships)
+			.set({ role: newRole })
+			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
+			.run();
+	});
+}
+
+export function removeMember(actor: Actor, projectId: string, userId: string) {
+	projectAccess(actor, projectId, 'owner');
+	db.transaction((tx) => {
+		const m = membershipOf(projectId, userId);
+		if (m.role === 'owner' && ownerCount(projectId) === 1)
+			throw new ServiceError(409, 'A project needs at least one owner; make someone else owner first');
+		tx.delete(memberships)
+			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
+			.run();
+	});
+}

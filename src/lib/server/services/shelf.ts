@@ -1,0 +1,106 @@
+/**
+ * The Shelf: a project's saved configurations. Viewers read, editors write.
+ * Updates carry the version the editor last read; a stale version is refused (409).
+ */
+import { and, desc, eq, sql } from 'drizzle-orm';
+import { db } from '../db';
+import { shelfEntries, users } from '../db/schema';
+import { projectAccess, type Actor } from '../access';
+import { badRequest, conflict, notFound } from '../errors';
+import { newId } from '../ids';
+import { parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
+import { ConfigurationError, parseConfiguration } from '../../physics/parse';
+import { parseSpecies } from '../../physics/elements';
+
+/** Checks the notation with the term engine's parser; the text is stored as typed. */
+function checkNotation(notation: string) {
+	try {
+		parseConfiguration(notation);
+	} catch (e) {
+		if (e instanceof ConfigurationError) throw badRequest(e.message, { field: 'notation', token: e.token });
+		throw e;
+	}
+}
+
+function checkSpecies(species: string) {
+	if (!species) return;
+	try {
+		parseSpecies(species);
+	} catch (e) {
+		throw badRequest(e instanceof Error ? e.message : 'Species not understood', { field: 'species' });
+	}
+}
+
+const entryColumns = {
+	id: shelfEntries.id,
+	projectId: shelfEntries.projectId,
+	title: shelfEntries.title,
+	species: shelfEntries.species,
+	notation: shelfEntries.notation,
+	notes: shelfEntries.notes,
+	tags: shelfEntries.tags,
+	version: shelfEntries.version,
+	createdAt: shelfEntries.createdAt,
+	updatedAt: shelfEntries.updatedAt,
+	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${shelfEntries.updatedBy})`
+};
+
+export type ShelfEntry = ReturnType<typeof readEntry>;
+
+function readEntry(projectId: string, entryId: string) {
+	const row = db
+		.select(entryColumns)
+		.from(shelfEntries)
+		.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.projectId, projectId)))
+		.get();
+	if (!row) throw notFound('No such Shelf entry in this project');
+	return row;
+}
+
+export function listEntries(actor: Actor, projectId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	return db.select(entryColumns).from(shelfEntries).where(eq(shelfEntries.projectId, projectId)).orderBy(desc(shelfEntries.updatedAt)).all();
+}
+
+export function getEntry(actor: Actor, projectId: string, entryId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	return readEntry(projectId, entryId);
+}
+
+export function createEntry(actor: Actor, projectId: string, input: unknown) {
+	projectAccess(actor, projectId, 'editor');
+	const data = parseInput(shelfInputSchema, input);
+	checkNotation(data.notation);
+	checkSpecies(data.species);
+	const id = newId();
+	db.insert(shelfEntries)
+		.values({ id, projectId, ...data, createdBy: actor.id, updatedBy: actor.id })
+		.run();
+	return readEntry(projectId, id);
+}
+
+export function updateEntry(actor: Actor, projectId: string, entryId: string, input: unknown) {
+	projectAccess(actor, projectId, 'editor');
+	const { version, ...data } = parseInput(shelfPatchSchema, input);
+	if (data.notation !== undefined) checkNotation(data.notation);
+	if (data.species !== undefined) checkSpecies(data.species);
+	return db.transaction(() => {
+		const current = readEntry(projectId, entryId);
+		if (current.version !== version)
+			throw conflict(
+				`This entry was changed by ${current.updatedBy ?? 'someone'} since you opened it (you had version ${version}, it is now ${current.version}); reload to see their change, then edit again`,
+				{ currentVersion: current.version }
+			);
+		db.update(shelfEntries)
+			.set({ ...data, version: version + 1, updatedBy: actor.id, updatedAt: new Date() })
+			.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.version, version)))
+			.run();
+		return readEntry(projectId, entryId);
+	});
+}
+
+export function deleteEntry(actor: Actor, projectId: string, entryId: string) {
+	projectAccess(actor, projectId, 'editor');
+	readEntry(projectId, entryId);
+	db.delete(shelfEntries).where(eq(shelfEntries.id, entryId)).run();
+}

@@ -1,0 +1,81 @@
+/**
+ * Accounts: sign-up, password check with a rate limit, and the admin's list of users.
+ */
+import { asc, eq, sql } from 'drizzle-orm';
+import { db } from '../db';
+import { users } from '../db/schema';
+import { requireSiteAdmin, type Actor } from '../access';
+import { ServiceError, badRequest, notFound } from '../errors';
+import { newId } from '../ids';
+import { hashPassword, verifyPassword } from '../password';
+import { createLimiter } from '../rate-limit';
+import { parseInput, signInSchema, signUpSchema, siteRoleSchema } from '../validation';
+
+/** Five failed sign-ins per account (or twenty per address) in fifteen minutes. */
+const perAccount = createLimiter(5, 15 * 60_000);
+const perAddress = createLimiter(20, 15 * 60_000);
+
+/** The same words whether the e-mail is unknown or the password wrong. */
+export const SIGN_IN_FAILED = 'E-mail or password is not right';
+
+export async function signUp(input: unknown): Promise<Actor> {
+	const data = parseInput(signUpSchema, input);
+	const taken = db.select({ id: users.id }).from(users).where(eq(users.email, data.email)).get();
+	// Saying "taken" reveals that an account exists; a sign-up form cannot avoid that
+	// without e-mail confirmation, so we keep the words neutral.
+	if (taken) throw badRequest('An account cannot be made with this e-mail; sign in instead, or use another address', { field: 'email' });
+	const passwordHash = await hashPassword(data.password);
+	const id = newId();
+	return db.transaction((tx) => {
+		// The first account on a fresh site administers it.
+		const count = tx.select({ n: sql<number>`count(*)` }).from(users).get()!.n;
+		const siteRole = count === 0 ? 'admin' : 'member';
+		tx.insert(users).values({ id, email: data.email, name: data.name, passwordHash, siteRole }).run();
+		return { id, email: data.email, name: data.name, siteRole };
+	});
+}
+
+export async function checkPassword(input: unknown, address: string): Promise<Actor> {
+	const data = parseInput(signInSchema, input);
+	const accountKey = `signin:${data.email}`;
+	const addressKey = `signin-ip:${address}`;
+	const wait = Math.max(perAccount.check(accountKey), perAddress.check(addressKey));
+	if (wait > 0)
+		throw new ServiceError(429, `Too many sign-in attempts; try again in ${Math.ceil(wait / 60)} minute${wait > 60 ? 's' : ''}`);
+	const user = db.select().from(users).where(eq(users.email, data.email)).get();
+	// Verify against a dummy hash for unknown e-mails so timing does not tell them apart.
+	const ok = user ? await verifyPassword(user.passwordHash, data.password) : (await verifyPassword(await dummyHash(), data.password), false);
+	if (!user || !ok) {
+		perAccount.hit(accountKey);
+		perAddress.hit(addressKey);
+		throw badRequest(SIGN_IN_FAILED);
+	}
+	perAccount.reset(accountKey);
+	return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
+}
+
+let dummy: Promise<string> | null = null;
+const dummyHash = () => (dummy ??= hashPassword('termwright-dummy-password'));
+
+export function listUsers(actor: Actor) {
+	requireSiteAdmin(actor);
+	return db
+		.select({ id: users.id, name: users.name, email: users.email, siteRole: users.siteRole, createdAt: users.createdAt })
+		.from(users)
+		.orderBy(asc(users.name))
+		.all();
+}
+
+export function setSiteRole(actor: Actor, userId: string, role: unknown) {
+	requireSiteAdmin(actor);
+	const siteRole = parseInput(siteRoleSchema, role);
+	db.transaction((tx) => {
+		const user = tx.select().from(users).where(eq(users.id, userId)).get();
+		if (!user) throw notFound('No such user');
+		if (user.siteRole === 'admin' && siteRole !== 'admin') {
+			const admins = tx.select({ n: sql<number>`count(*)` }).from(users).where(eq(users.siteRole, 'admin')).get()!.n;
+			if (admins === 1) throw new ServiceError(409, 'The site needs at least one admin; make someone else admin first');
+		}
+		tx.update(users).set({ siteRole }).where(eq(users.id, userId)).run();
+	});
+}

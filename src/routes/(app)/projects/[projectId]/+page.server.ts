@@ -1,0 +1,34 @@
+import { redirect } from '@sveltejs/kit';
+import type { Actions, PageServerLoad } from './$types';
+import { deleteProject, getProject, updateProject } from '$lib/server/services/projects';
+import { forAction, forPage, requireUser } from '$lib/server/http';
+
+export const load: PageServerLoad = (event) => {
+	const user = requireUser(event);
+	// The Shelf itself is fetched by the page from /api/v1 in the browser.
+	return { project: forPage(() => getProject(user, event.params.projectId)) };
+};
+
+export const actions: Actions = {
+	rename: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const result = await forAction(() =>
+			updateProject(user, event.params.projectId, {
+				name: String(form.get('name') ?? ''),
+				description: String(form.get('description') ?? '')
+			})
+		);
+		return result.ok ? { saved: true } : result.failure;
+	},
+	delete: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const project = forPage(() => getProject(user, event.params.projectId));
+		if (String(form.get('confirm') ?? '') !== project.name)
+			return { deleteMessage: `Type the project name "${project.name}" to confirm` };
+		const result = await forAction(() => deleteProject(user, event.params.projectId));
+		if (!result.ok) return result.failure;
+		redirect(303, '/projects');
+	}
+};

@@ -1,0 +1,23 @@
+import { redirect } from '@sveltejs/kit';
+import type { Actions, PageServerLoad } from './$types';
+import { projectAccess } from '$lib/server/access';
+import { createEntry } from '$lib/server/services/shelf';
+import { forAction, forPage, requireUser } from '$lib/server/http';
+import { shelfFieldsFrom } from '$lib/server/forms';
+
+export const load: PageServerLoad = (event) => {
+	const user = requireUser(event);
+	forPage(() => projectAccess(user, event.params.projectId, 'editor'));
+	const q = event.url.searchParams;
+	return { prefill: { title: q.get('title') ?? '', species: q.get('species') ?? '', notation: q.get('config') ?? '', notes: '', tags: [] } };
+};
+
+export const actions: Actions = {
+	default: async (event) => {
+		const user = requireUser(event);
+		const values = shelfFieldsFrom(await event.request.formData());
+		const result = await forAction(() => createEntry(user, event.params.projectId, values), { values });
+		if (!result.ok) return result.failure;
+		redirect(303, `/projects/${event.params.projectId}/shelf/${result.value.id}`);
+	}
+};

@@ -1,0 +1,26 @@
+import { redirect } from '@sveltejs/kit';
+import type { Actions, PageServerLoad } from './$types';
+import { checkPassword } from '$lib/server/services/users';
+import { startSession } from '$lib/server/session';
+import { forAction } from '$lib/server/http';
+
+/** Only same-site paths are followed after sign-in. */
+const safeNext = (next: string | null) => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/projects');
+
+export const load: PageServerLoad = ({ locals, url }) => {
+	if (locals.user) redirect(303, safeNext(url.searchParams.get('next')));
+};
+
+export const actions: Actions = {
+	default: async (event) => {
+		const form = await event.request.formData();
+		const email = String(form.get('email') ?? '');
+		const result = await forAction(() =>
+			checkPassword({ email, password: String(form.get('password') ?? '') }, event.getClientAddress()),
+			{ email }
+		);
+		if (!result.ok) return result.failure;
+		await startSession(event.cookies, result.value.id);
+		redirect(303, safeNext(event.url.searchParams.get('next')));
+	}
+};
