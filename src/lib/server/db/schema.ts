@@ -119,3 +119,12 @@ export const outbox = sqliteTable('outbox', {
 	body: text('body').notNull(),
 	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
 });
+
+/** One-time password reset links; only the SHA-256 of the token is stored. */
+export const passwordResets = sqliteTable('password_resets', {
+	tokenHash: text('token_hash').primaryKey(),
+	userId: text('user_id')
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' }),
+	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull()
+});
