@@ -5,6 +5,8 @@ import { error, fail, json, redirect, type RequestEvent } from '@sveltejs/kit';
 import { ZodError } from 'zod';
 import type { Actor } from './access';
 import { ServiceError } from './errors';
+import { ConfigurationError } from '../physics/parse';
+import { SpeciesError } from '../physics/elements';
 
 /** The signed-in user, or a redirect to the sign-in page that comes back here. */
 export function requireUser(event: RequestEvent): Actor {
@@ -61,6 +63,9 @@ export function api<E extends RequestEvent>(handler: (event: E) => Response | Pr
 		} catch (e) {
 			if (e instanceof ServiceError) return jsonError(e.status, e.message, e.details);
 			if (e instanceof ZodError) return jsonError(400, e.issues[0]?.message ?? 'Bad input');
+			// The engine reports bad input with these; each message says what is allowed.
+			if (e instanceof ConfigurationError || e instanceof SpeciesError) return jsonError(400, e.message, { token: e.token });
+			if (e instanceof RangeError) return jsonError(400, e.message);
 			throw e;
 		}
 	};
@@ -81,4 +86,12 @@ export async function readJson(event: RequestEvent, maxBytes = 256 * 1024): Prom
 	} catch {
 		throw new ServiceError(400, 'Request body must be JSON');
 	}
+}
+
+/** A required query parameter, with a message naming it when missing or too long. */
+export function queryParam(event: RequestEvent, name: string, maxLength = 200): string {
+	const value = event.url.searchParams.get(name);
+	if (value === null || value.trim() === '') throw new ServiceError(400, `Query parameter "${name}" is required`);
+	if (value.length > maxLength) throw new ServiceError(400, `Query parameter "${name}" is over ${maxLength} characters`);
+	return value;
 }

@@ -1,0 +1,7 @@
+// `npm run bench`: the term engine's speed and memory figures (not tests; they depend on the machine).
+import { main as benchTerms } from './bench-terms';
+
+console.log('== Term engine: generating-function counting against explicit enumeration ==');
+benchTerms();
+console.log('\n== Exact Wigner symbols at the API limits, and jj levels ==');
+await import('./bench-wigner');

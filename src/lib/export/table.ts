@@ -1,0 +1,100 @@
+/**
+ * Tables for export: one column list, three formats (CSV through papaparse, JSON, LaTeX with
+ * booktabs rules). Plain data in, text out; used by the pages (downloads) and the API.
+ */
+import Papa from 'papaparse';
+
+export interface Column<R> {
+	/** Header text for CSV and JSON keys. */
+	key: string;
+	/** Header for LaTeX (may hold math, e.g. '$g_J$'). Defaults to the escaped key. */
+	latex?: string;
+	/** LaTeX column alignment: l, r, c. */
+	align?: 'l' | 'r' | 'c';
+	value: (row: R) => string | number | null;
+	/** LaTeX cell (already escaped/math); defaults to the escaped value. */
+	latexValue?: (row: R) => string;
+}
+
+export type ExportFormat = 'csv' | 'json' | 'tex';
+export const EXPORT_FORMATS: readonly ExportFormat[] = ['csv', 'json', 'tex'];
+
+export const MIME: Record<ExportFormat, string> = {
+	csv: 'text/csv; charset=utf-8',
+	json: 'application/json; charset=utf-8',
+	tex: 'application/x-tex; charset=utf-8'
+};
+
+export function toCsv<R>(rows: readonly R[], columns: readonly Column<R>[]): string {
+	return Papa.unparse({
+		fields: columns.map((c) => c.key),
+		data: rows.map((r) => columns.map((c) => c.value(r) ?? ''))
+	});
+}
+
+export function toJson<R>(rows: readonly R[], columns: readonly Column<R>[], meta: Record<string, unknown> = {}): string {
+	const data = rows.map((r) => Object.fromEntries(columns.map((c) => [c.key, c.value(r)])));
+	return JSON.stringify({ ...meta, rows: data }, null, 2);
+}
+
+const LATEX_SPECIALS: Record<string, string> = {
+	'\\': '\\textbackslash{}',
+	'&': '\\&',
+	'%': '\\%',
+	$: '\\$',
+	'#': '\\#',
+	_: '\\_',
+	'{': '\\{',
+	'}': '\\}',
+	'~': '\\textasciitilde{}',
+	'^': '\\textasciicircum{}'
+};
+
+/** Escapes text for LaTeX. */
+export function latexEscape(text: string): string {
+	return text.replace(/[\\&%$#_{}~^]/g, (ch) => LATEX_SPECIALS[ch]);
+}
+
+/**
+ * A booktabs table (needs \usepackage{booktabs}) in a table environment with a caption.
+ */
+export function toLatex<R>(rows: readonly R[], columns: readonly Column<R>[], caption: string): string {
+	const spec = columns.map((c) => c.align ?? 'l').join('');
+	const head = columns.map((c) => c.latex ?? latexEscape(c.key)).join(' & ');
+	const body = rows.map(
+		(r) =>
+			columns
+				.map((c) => {
+					if (c.latexValue) return c.latexValue(r);
+					const v = c.value(r);
+					return v === null ? '' : latexEscape(String(v));
+				})
+				.join(' & ') + ' \\\\'
+	);
+	return [
+		'% Requires \\usepackage{booktabs}',
+		'\\begin{table}',
+		'  \\centering',
+		`  \\caption{${latexEscape(caption)}}`,
+		`  \\begin{tabular}{${spec}}`,
+		'    \\toprule',
+		`    ${head} \\\\`,
+		'    \\midrule',
+		...body.map((b) => `    ${b}`),
+		'    \\bottomrule',
+		'  \\end{tabular}',
+		'\\end{table}',
+		''
+	].join('\n');
+}
+
+export function render<R>(format: ExportFormat, rows: readonly R[], columns: readonly Column<R>[], caption: string, meta: Record<string, unknown> = {}): string {
+	if (format === 'csv') return toCsv(rows, columns);
+	if (format === 'json') return toJson(rows, columns, meta);
+	return toLatex(rows, columns, caption);
+}
+
+/** LaTeX for a term symbol ^{2S+1}L_J with an optional odd-parity mark: ${}^{4}\mathrm{F}^{o}_{3/2}$. */
+export function latexTerm(multiplicity: number, letter: string, J: string | null, odd: boolean): string {
+	return `$^{${multiplicity}}\\mathrm{${letter}}${odd ? '^{\\circ}' : ''}${J === null ? '' : `_{${J}}`}$`;
+}
