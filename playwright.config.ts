@@ -1,6 +1,8 @@
 import { defineConfig } from '@playwright/test';
 
 const PORT = Number(process.env.E2E_PORT ?? 4173);
+// One throwaway database per port, so runs on different ports do not meet.
+const DB = `data/e2e-${PORT}.db`;
 
 /** End-to-end tests run against the built app (`node build`) on a throwaway database. */
 export default defineConfig({
@@ -21,10 +23,10 @@ export default defineConfig({
 		}
 	},
 	webServer: {
-		command: 'rm -f data/e2e.db data/e2e.db-* && node scripts/start.js',
+		command: `rm -f ${DB} ${DB}-* && node scripts/start.js`,
 		url: `http://localhost:${PORT}/api/v1`,
 		reuseExistingServer: false,
 		timeout: 60_000,
-		env: { PORT: String(PORT), DATABASE_PATH: 'data/e2e.db', COOKIE_SECURE: 'false', E2E: '1' }
+		env: { PORT: String(PORT), DATABASE_PATH: DB, COOKIE_SECURE: 'false', E2E: '1' }
 	}
 });

@@ -14,6 +14,8 @@ export interface Column<R> {
 	value: (row: R) => string | number | null;
 	/** LaTeX cell (already escaped/math); defaults to the escaped value. */
 	latexValue?: (row: R) => string;
+	/** False to leave the column out of the LaTeX table (e.g. audit columns). */
+	inLatex?: boolean;
 }
 
 export type ExportFormat = 'csv' | 'json' | 'tex';
@@ -58,7 +60,8 @@ export function latexEscape(text: string): string {
 /**
  * A booktabs table (needs \usepackage{booktabs}) in a table environment with a caption.
  */
-export function toLatex<R>(rows: readonly R[], columns: readonly Column<R>[], caption: string): string {
+export function toLatex<R>(rows: readonly R[], allColumns: readonly Column<R>[], caption: string): string {
+	const columns = allColumns.filter((c) => c.inLatex !== false);
 	const spec = columns.map((c) => c.align ?? 'l').join('');
 	const head = columns.map((c) => c.latex ?? latexEscape(c.key)).join(' & ');
 	const body = rows.map(

@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import { latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
+import { levelColumns, levelRows } from './term-sheet';
+import { termSheet } from '../physics/report';
+
+type Row = { name: string; value: number | null };
+const columns: Column<Row>[] = [
+	{ key: 'name', value: (r) => r.name },
+	{ key: 'value', align: 'r', value: (r) => r.value }
+];
+
+describe('exports', () => {
+	it('CSV quotes commas and quotes (RFC 4180)', () => {
+		expect(toCsv([{ name: 'a, "b"', value: 1 }], columns)).toBe('name,value\r\n"a, ""b""",1');
+	});
+
+	it('LaTeX escapes the ten specials and uses booktabs rules', () => {
+		expect(latexEscape('50% of $x_1 & {y}#')).toBe('50\\% of \\$x\\_1 \\& \\{y\\}\\#');
+		const tex = toLatex([{ name: 'x_1', value: null }], columns, 'Test');
+		expect(tex).toContain('\\toprule');
+		expect(tex).toContain('\\midrule');
+		expect(tex).toContain('\\bottomrule');
+		expect(tex).toContain('\\begin{tabular}{lr}');
+		expect(tex).toContain('x\\_1 &  \\\\');
+	});
+
+	it('term symbols in LaTeX: ⁴F°₃/₂ → $^{4}\\mathrm{F}^{\\circ}_{3/2}$', () => {
+		expect(latexTerm(4, 'F', '3/2', true)).toBe('$^{4}\\mathrm{F}^{\\circ}_{3/2}$');
+	});
+
+	it('the Term sheet export of 3d5 4s has one row per J of each term and the ⁷S₃ row with g = 2', () => {
+		// ⁷S₃: g = 2 exactly for L = 0 (Landé formula). Repeated terms keep one row with their count.
+		const sheet = termSheet('3d5 4s');
+		const rows = levelRows(sheet);
+		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + t.levels.length, 0));
+		const csv = toCsv(rows, levelColumns);
+		expect(csv.split('\r\n')[0]).toBe('term,count,seniority,S,L,parity,J,g,g_decimal,weight');
+		expect(csv).toContain('7S,1,,3,0,even,3,2,2,7');
+	});
+});

@@ -1,0 +1,26 @@
+/**
+ * Names for single levels of a configuration that do not depend on table order:
+ * "<term>#<occurrence>|<J>", e.g. "2D#2|5/2" for the second ²D term's J = 5/2 level.
+ * Shared by the server (annotations) and the pages.
+ */
+export interface LevelRef {
+	term: string;
+	occurrence: number;
+	J: string;
+}
+
+export function levelKey(ref: LevelRef): string {
+	return `${ref.term}#${ref.occurrence}|${ref.J}`;
+}
+
+export function parseLevelKey(key: string): LevelRef | null {
+	const m = /^(\d+[A-Z](?:\[L=\d+\])?)#(\d+)\|(\d+(?:\/2)?)$/.exec(key);
+	return m ? { term: m[1], occurrence: Number(m[2]), J: m[3] } : null;
+}
+
+/** Every level of a Term sheet, one per occurrence of a repeated term, in sheet order. */
+export function levelRefs(terms: readonly { label: string; count: number; levels: readonly { J: string }[] }[]): LevelRef[] {
+	return terms.flatMap((t) =>
+		Array.from({ length: t.count }, (_, k) => t.levels.map((lv) => ({ term: t.label, occurrence: k + 1, J: lv.J }))).flat()
+	);
+}

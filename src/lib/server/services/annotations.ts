@@ -1,0 +1,122 @@
+/**
+ * Per-level annotations of a Shelf entry: observed energy with uncertainty, assignment status
+ * and a comment, with who changed them and when. Viewers read; editors write. An edit based on
+ * an old version is refused (409), so two people cannot overwrite each other unknowingly.
+ */
+import { and, eq, sql } from 'drizzle-orm';
+import { db } from '../db';
+import { levelAnnotations, shelfEntries, users } from '../db/schema';
+import { projectAccess, type Actor } from '../access';
+import { badRequest, conflict, notFound } from '../errors';
+import { newId } from '../ids';
+import { annotationInputSchema, parseInput } from '../validation';
+import { termSheet, type TermSheet } from '../../physics/report';
+import { levelKey, levelRefs } from '../../levels';
+
+const annotationColumns = {
+	id: levelAnnotations.id,
+	levelKey: levelAnnotations.levelKey,
+	observedEnergy: levelAnnotations.observedEnergy,
+	uncertainty: levelAnnotations.uncertainty,
+	status: levelAnnotations.status,
+	comment: levelAnnotations.comment,
+	version: levelAnnotations.version,
+	updatedAt: levelAnnotations.updatedAt,
+	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.updatedBy})`
+};
+
+export type Annotation = ReturnType<typeof readAnnotations>[number];
+
+function entryOf(projectId: string, entryId: string) {
+	const entry = db
+		.select({ id: shelfEntries.id, notation: shelfEntries.notation, title: shelfEntries.title, species: shelfEntries.species })
+		.from(shelfEntries)
+		.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.projectId, projectId)))
+		.get();
+	if (!entry) throw notFound('No such Shelf entry in this project');
+	return entry;
+}
+
+function readAnnotations(entryId: string) {
+	return db.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.entryId, entryId)).all();
+}
+
+export function listAnnotations(actor: Actor, projectId: string, entryId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	entryOf(projectId, entryId);
+	return readAnnotations(entryId);
+}
+
+/** The entry's Term sheet with each level's annotation (or null), for the page and the exports. */
+export function annotatedLevels(actor: Actor, projectId: string, entryId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	const entry = entryOf(projectId, entryId);
+	const sheet: TermSheet = termSheet(entry.notation);
+	const notes = new Map(readAnnotations(entryId).map((a) => [a.levelKey, a]));
+	const byTerm = new Map(sheet.terms.map((t) => [t.label, t]));
+	const levels = levelRefs(sheet.terms).map((ref) => {
+		const term = byTerm.get(ref.term)!;
+		const level = term.levels.find((lv) => lv.J === ref.J)!;
+		const key = levelKey(ref);
+		return { key, ...ref, multiplicity: term.multiplicity, letter: term.letter, count: term.count, g: level.g, gDecimal: level.gDecimal, hundRank: term.hundRank, annotation: notes.get(key) ?? null };
+	});
+	return { entry, sheet, levels };
+}
+
+export function saveAnnotation(actor: Actor, projectId: string, entryId: string, input: unknown) {
+	projectAccess(actor, projectId, 'editor');
+	const data = parseInput(annotationInputSchema, input);
+	const entry = entryOf(projectId, entryId);
+	const known = new Set(levelRefs(termSheet(entry.notation).terms).map(levelKey));
+	if (!known.has(data.levelKey))
+		throw badRequest(`"${data.levelKey}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`, {
+			field: 'levelKey'
+		});
+	return db.transaction((tx) => {
+		const current = tx
+			.select()
+			.from(levelAnnotations)
+			.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.levelKey, data.levelKey)))
+			.get();
+		const values = {
+			observedEnergy: data.observedEnergy,
+			uncertainty: data.uncertainty,
+			status: data.status,
+			comment: data.comment,
+			updatedBy: actor.id,
+			updatedAt: new Date()
+		};
+		if (!current) {
+			tx.insert(levelAnnotations).values({ id: newId(), entryId, levelKey: data.levelKey, ...values }).run();
+		} else {
+			if (data.version !== undefined && data.version !== current.version)
+				throw conflict(
+					`The note on ${data.levelKey} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
+					{ currentVersion: current.version }
+				);
+			if (data.version === undefined)
+				throw conflict(`The level ${data.levelKey} already has a note; send the version you last read to change it`, {
+					currentVersion: current.version
+				});
+			tx.update(levelAnnotations)
+				.set({ ...values, version: current.version + 1 })
+				.where(eq(levelAnnotations.id, current.id))
+				.run();
+		}
+		return tx
+			.select(annotationColumns)
+			.from(levelAnnotations)
+			.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.levelKey, data.levelKey)))
+			.get()!;
+	});
+}
+
+export function deleteAnnotation(actor: Actor, projectId: string, entryId: string, levelKeyText: string) {
+	projectAccess(actor, projectId, 'editor');
+	entryOf(projectId, entryId);
+	const result = db
+		.delete(levelAnnotations)
+		.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.levelKey, levelKeyText)))
+		.run();
+	if (result.changes === 0) throw notFound(`No note on ${levelKeyText}`);
+}

@@ -1,0 +1,23 @@
+import { json } from '@sveltejs/kit';
+import type { RequestHandler } from './$types';
+import { deleteAnnotation, listAnnotations, saveAnnotation } from '$lib/server/services/annotations';
+import { api, apiActor, queryParam, readJson } from '$lib/server/http';
+
+export const GET: RequestHandler = api((event) =>
+	json({ annotations: listAnnotations(apiActor(event), event.params.projectId, event.params.entryId) })
+);
+
+/**
+ * Creates or changes the note on one level. Body: { levelKey, observedEnergy, uncertainty, status, comment, version? };
+ * changing an existing note needs the version you read (409 when stale).
+ */
+export const PUT: RequestHandler = api(async (event) => {
+	const actor = apiActor(event);
+	return json({ annotation: saveAnnotation(actor, event.params.projectId, event.params.entryId, await readJson(event)) });
+});
+
+/** `?level=<levelKey>` */
+export const DELETE: RequestHandler = api((event) => {
+	deleteAnnotation(apiActor(event), event.params.projectId, event.params.entryId, queryParam(event, 'level', 80));
+	return new Response(null, { status: 204 });
+});
