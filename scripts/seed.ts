@@ -6,7 +6,8 @@ import { users } from '../src/lib/server/db/schema';
 import { signUp } from '../src/lib/server/services/users';
 import { addMember, createProject } from '../src/lib/server/services/projects';
 import { createEntry } from '../src/lib/server/services/shelf';
-import { DEMO_PASSWORD, demoProject, demoShelf, demoUsers } from './demo-data';
+import { saveAnnotation } from '../src/lib/server/services/annotations';
+import { DEMO_PASSWORD, demoNotes, demoProject, demoShelf, demoUsers } from './demo-data';
 
 async function main() {
 	if (db.select().from(users).where(eq(users.email, demoUsers[0].email)).get()) {
@@ -14,10 +15,12 @@ async function main() {
 	} else {
 		const [owner, ...others] = demoUsers;
 		const ownerActor = await signUp({ name: owner.name, email: owner.email, password: DEMO_PASSWORD });
-		for (const u of others) await signUp({ name: u.name, email: u.email, password: DEMO_PASSWORD });
+		const actors = [ownerActor];
+		for (const u of others) actors.push(await signUp({ name: u.name, email: u.email, password: DEMO_PASSWORD }));
 		const project = createProject(ownerActor, demoProject);
 		for (const u of others) addMember(ownerActor, project.id, { email: u.email, role: u.role });
-		for (const entry of demoShelf) createEntry(ownerActor, project.id, entry);
+		const entries = demoShelf.map((entry) => createEntry(ownerActor, project.id, entry));
+		for (const { entry, by, ...note } of demoNotes) saveAnnotation(actors[by], project.id, entries[entry].id, note);
 		console.log(`Seeded the demo project "${project.name}" with ${demoShelf.length} Shelf entries.`);
 	}
 	console.log('Demo accounts (password for all: ' + DEMO_PASSWORD + '):');

@@ -5,6 +5,7 @@ import { error, fail, json, redirect, type RequestEvent } from '@sveltejs/kit';
 import { ZodError } from 'zod';
 import type { Actor } from './access';
 import { ServiceError } from './errors';
+import { actorForToken } from './services/tokens';
 import { ConfigurationError } from '../physics/parse';
 import { SpeciesError } from '../physics/elements';
 
@@ -71,9 +72,16 @@ export function api<E extends RequestEvent>(handler: (event: E) => Response | Pr
 	};
 }
 
-/** The API's actor: cookie session (set by hooks). */
+/** The API's actor: a personal API token (`Authorization: Bearer tw_…`) or the cookie session. */
 export function apiActor(event: RequestEvent): Actor {
-	if (!event.locals.user) throw new ServiceError(401, 'Sign in first (cookie session)');
+	const auth = event.request.headers.get('authorization');
+	if (auth) {
+		const m = /^Bearer\s+(\S+)$/i.exec(auth);
+		const actor = m ? actorForToken(m[1]) : null;
+		if (!actor) throw new ServiceError(401, 'The API token is not valid; create one on your account page');
+		return actor;
+	}
+	if (!event.locals.user) throw new ServiceError(401, 'Sign in first (cookie session) or send a personal API token');
 	return event.locals.user;
 }
 

@@ -128,3 +128,19 @@ export const passwordResets = sqliteTable('password_resets', {
 		.references(() => users.id, { onDelete: 'cascade' }),
 	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull()
 });
+
+/** Personal API tokens for scripts (`Authorization: Bearer tw_…`); only the SHA-256 is stored. */
+export const apiTokens = sqliteTable(
+	'api_tokens',
+	{
+		id: text('id').primaryKey(),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		tokenHash: text('token_hash').notNull().unique(),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' })
+	},
+	(t) => [index('api_tokens_user_idx').on(t.userId)]
+);

@@ -58,8 +58,10 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 		const term = byTerm.get(ref.term)!;
 		const level = term.levels.find((lv) => lv.J === ref.J)!;
 		const key = levelKey(ref);
-		return { key, ...ref, multiplicity: term.multiplicity, letter: term.letter, count: term.count, g: level.g, gDecimal: level.gDecimal, hundRank: term.hundRank, annotation: notes.get(key) ?? null };
+		return { key, ...ref, multiplicity: term.multiplicity, letter: term.letter, count: term.count, g: level.g, gDecimal: level.gDecimal, hundRank: term.hundRank, jRank: term.jOrder.indexOf(ref.J), annotation: notes.get(key) ?? null };
 	});
+	// Hund's heuristic order (ground level first), then occurrence, then J in the expected multiplet order.
+	levels.sort((a, b) => a.hundRank - b.hundRank || a.occurrence - b.occurrence || a.jRank - b.jRank);
 	return { entry, sheet, levels };
 }
 

@@ -1,0 +1,82 @@
+/**
+ * The public compute API, as scripts use it. Check values name their sources.
+ */
+import { expect, test } from '@playwright/test';
+
+test.describe('GET /api/v1/terms', () => {
+	test('d3 gives 2P 2D(2) 2F 2G 2H 4P 4F with Hund ground ⁴F₃/₂ (rigorous)', async ({ request }) => {
+		// d³ terms: Condon & Shortley (1935) ch. VII table of equivalent-electron terms; ⁴F₃/₂ is the
+		// ground level of V³⁺-like / Ti-group d³ ions (Hund's rules; e.g. V I 3d³4s² ⁴F₃/₂ in the NIST/CRC table).
+		const res = await request.get('/api/v1/terms?config=' + encodeURIComponent('[Ar] 3d3'));
+		expect(res.status()).toBe(200);
+		const body = await res.json();
+		expect(body.configuration).toMatchObject({ electrons: 21, parity: 'even' });
+		expect(body.microstates).toBe(120); // C(10,3) = 120
+		const summary = body.terms.map((t: { label: string; count: number }) => t.label + (t.count > 1 ? `(${t.count})` : '')).sort();
+		expect(summary).toEqual(['2D(2)', '2F', '2G', '2H', '2P', '4F', '4P']);
+		const f4 = body.terms.find((t: { label: string }) => t.label === '4F');
+		expect(f4).toMatchObject({ S: '3/2', L: 3, count: 1, seniority: 3, weight: 28 });
+		// g(⁴F₃/₂) = 2/5 (Landé formula with g_s = 2).
+		expect(f4.levels[0]).toEqual({ J: '3/2', g: '2/5', gDecimal: 0.4, weight: 4 });
+		expect(body.hund).toMatchObject({ term: '4F', J: '3/2', rigorous: true });
+	});
+
+	test('bad notation is a 400 naming the token and the rule', async ({ request }) => {
+		const res = await request.get('/api/v1/terms?config=1s2%202p7');
+		expect(res.status()).toBe(400);
+		const body = await res.json();
+		expect(body.error.token).toBe('2p7');
+		expect(body.error.message).toMatch(/at most 6/);
+	});
+
+	test('over-long input is refused with the limit', async ({ request }) => {
+		const res = await request.get('/api/v1/terms?config=' + '1s '.repeat(80));
+		expect(res.status()).toBe(400);
+		expect((await res.json()).error.message).toMatch(/200/);
+	});
+});
+
+test('GET /api/v1/jj: p² gives J = 0, 1, 2, 0, 2 as in LS', async ({ request }) => {
+	// jj coupling of p²: (1/2)² J=0; (1/2,3/2) J=1,2; (3/2)² J=0,2 (Condon & Shortley ch. XI; Cowan ch. 4).
+	const body = await (await request.get('/api/v1/jj?config=2p2')).json();
+	expect(body.levels.map((l: { J: string }) => l.J).sort()).toEqual(['0', '0', '1', '2', '2']);
+	expect(body.countsByJ).toEqual({ '0': 2, '1': 1, '2': 2 });
+	expect(body.countsAgreeWithLS).toBe(true);
+});
+
+test('GET /api/v1/wigner: (1 1 0; 1 −1 0) = 1/√3 exactly', async ({ request }) => {
+	// (j j 0; m −m 0) = (−1)^{j−m}/√(2j+1) (Edmonds 1957, Table 2); j = 1, m = 1 → +1/√3.
+	const body = await (await request.get('/api/v1/wigner?symbol=3j&args=1,1,0,1,-1,0')).json();
+	expect(body.exact).toEqual({ sign: 1, squared: '1/3' });
+	expect(body.value).toBeCloseTo(1 / Math.sqrt(3), 14);
+	const bad = await request.get('/api/v1/wigner?symbol=3j&args=1,1');
+	expect(bad.status()).toBe(400);
+	expect((await bad.json()).error.message).toMatch(/6/);
+});
+
+test('GET /api/v1/basis: |3/2 1/2⟩ of 1 ⊗ 1/2 has √(2/3) on |0, 1/2⟩', async ({ request }) => {
+	// Clebsch–Gordan table for j2 = 1/2 (Condon & Shortley 1935 ch. III; PDG table): ⟨1 0; ½ ½|3/2 ½⟩ = √(2/3).
+	const body = await (await request.get('/api/v1/basis?j1=1&j2=1/2')).json();
+	const row = body.coupled.find((r: { J: string; M: string }) => r.J === '3/2' && r.M === '1/2');
+	const c = row.components.find((x: { m1: string; m2: string }) => x.m1 === '0' && x.m2 === '1/2');
+	expect(c.coefficient).toMatchObject({ sign: 1, squared: '2/3' });
+});
+
+test('GET /api/v1/species: Fe II → [Ar] 3d6 4s with a caution for ions', async ({ request }) => {
+	// Fe II (Fe⁺) ground configuration 3d⁶4s (NIST ASD / CRC ground levels of ions).
+	const body = await (await request.get('/api/v1/species?name=Fe%20II')).json();
+	expect(body.notation).toMatch(/3d6 4s$/);
+	expect(body.species).toMatchObject({ symbol: 'Fe', charge: 1 });
+	const bad = await request.get('/api/v1/species?name=Xx%20II');
+	expect(bad.status()).toBe(400);
+});
+
+test('GET /api/v1/microstates pages through the 15 microstates of p²', async ({ request }) => {
+	// C(6,2) = 15 microstates of p² (combinatorics).
+	const body = await (await request.get('/api/v1/microstates?config=2p2&offset=10&limit=10')).json();
+	expect(body.total).toBe('15');
+	expect(body.items).toHaveLength(5);
+	const big = await request.get('/api/v1/microstates?config=2p2&limit=501');
+	expect(big.status()).toBe(400);
+	expect((await big.json()).error.message).toMatch(/500/);
+});

@@ -1,0 +1,78 @@
+import { expect, test } from '@playwright/test';
+import { newUser, shot } from './helpers';
+
+test('annotate a level on the Shelf, reload, export; viewers cannot annotate; stale notes are refused', async ({ browser }) => {
+	const owner = await newUser(browser, 'Ola Owner', 'shelf-owner');
+	const { page } = owner;
+	await page.getByLabel('Name').fill('Peculiar star');
+	await page.getByRole('button', { name: 'Create project' }).click();
+	await expect(page.getByRole('heading', { name: 'Peculiar star' })).toBeVisible();
+	const projectUrl = page.url();
+	const projectId = projectUrl.split('/').pop()!;
+
+	await page.getByRole('link', { name: 'Add configuration' }).click();
+	await page.getByLabel('Title').fill('Iron II ground configuration');
+	await page.getByLabel('Configuration').fill('[Ar] 3d6 4s');
+	await page.getByLabel('Species').fill('Fe II');
+	await page.getByLabel('Tags (comma separated)').fill('iron group, test');
+	await page.getByRole('button', { name: 'Save to Shelf' }).click();
+	await expect(page.getByTestId('entry-title')).toHaveText('Iron II ground configuration');
+	const entryUrl = page.url();
+	const entryId = entryUrl.split('/').pop()!;
+
+	// ⁶D₉/₂ is the Hund's-rule ground level of 3d⁶4s (Fe II ground level in the NIST/CRC ion tables).
+	const row = page.locator('tr[data-level="6D#1|9/2"]');
+	await row.getByRole('button', { name: 'Annotate' }).click();
+	await page.getByLabel('Observed energy (cm⁻¹)').fill('0');
+	await page.getByLabel('± (cm⁻¹)').fill('0.01');
+	await page.locator('select[name=status]').selectOption('confirmed');
+	await page.getByLabel('Comment').fill('adopted zero (test value)');
+	await page.getByRole('button', { name: 'Save note' }).click();
+	await expect(row).toContainText('confirmed');
+	await page.reload();
+	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('adopted zero (test value)');
+	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('Ola Owner');
+	await shot(page, 'shelf-entry-levels');
+
+	// Exports carry the note.
+	const csv = await (await page.request.get(`/api/v1/projects/${projectId}/shelf/${entryId}/levels?format=csv`)).text();
+	expect(csv.split('\r\n')[0]).toBe('level,term,occurrence,J,g,observed_energy_cm-1,uncertainty_cm-1,status,comment,updated_by,updated_at');
+	// g(⁶D₉/₂) = 14/9 (Landé formula, g_s = 2: 1 + (99/4 + 35/4 − 6)/(2·99/4)).
+	expect(csv).toContain('6D J=9/2,6D,1,9/2,14/9,0,0.01,confirmed,adopted zero (test value),Ola Owner,');
+	const download = page.waitForEvent('download');
+	await page.getByRole('link', { name: 'LaTeX' }).click();
+	const tex = await (await download).path().then((p) => import('node:fs').then((fs) => fs.readFileSync(p!, 'utf8')));
+	expect(tex).toContain('\\toprule');
+	expect(tex).toContain('$^{6}\\mathrm{D}_{9/2}$ & $14/9$ & 0 & 0.01 & confirmed');
+
+	// A viewer sees the note but has no way to change it, and the API refuses.
+	const viewer = await newUser(browser, 'Vic Viewer', 'shelf-viewer');
+	await page.goto(`${projectUrl}/members`);
+	await page.getByLabel('E-mail of their account').fill(viewer.email);
+	await page.getByRole('button', { name: 'Add' }).click();
+	await expect(page.getByTestId('member-list')).toContainText('Vic Viewer');
+	await viewer.page.goto(entryUrl);
+	await expect(viewer.page.locator('tr[data-level="6D#1|9/2"]')).toContainText('confirmed');
+	await expect(viewer.page.getByRole('button', { name: 'Annotate' })).toHaveCount(0);
+	const put = await viewer.page.request.put(`/api/v1/projects/${projectId}/shelf/${entryId}/annotations`, {
+		data: { levelKey: '6D#1|7/2', observedEnergy: 1 }
+	});
+	expect(put.status()).toBe(403);
+
+	// Two tabs of the owner: the second save from an old page is refused, not silently applied.
+	const second = await owner.context.newPage();
+	await second.goto(entryUrl);
+	await page.goto(entryUrl);
+	await page.locator('tr[data-level="6D#1|9/2"]').getByRole('button', { name: 'Edit' }).click();
+	await page.getByLabel('Comment').fill('first tab wins');
+	await page.getByRole('button', { name: 'Save note' }).click();
+	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('first tab wins');
+	await second.locator('tr[data-level="6D#1|9/2"]').getByRole('button', { name: 'Edit' }).click();
+	await second.getByLabel('Comment').fill('second tab loses');
+	await second.getByRole('button', { name: 'Save note' }).click();
+	await expect(second.getByRole('alert')).toContainText('changed by someone else');
+	await shot(second, 'shelf-stale-note');
+
+	await owner.context.close();
+	await viewer.context.close();
+});
