@@ -130,7 +130,7 @@ describe('configuration errors name the offending token', () => {
 		const e = errorOf('1s2 2s2 2p7');
 		expect(e.token).toBe('2p7');
 		expect(e.message).toMatch(/^a p subshell holds at most 6 electrons/);
-		expect(errorOf('4f15').message).toMatch(/^a f subshell holds at most 14 electrons/);
+		expect(errorOf('4f15').message).toMatch(/^an f subshell holds at most 14 electrons/);
 	});
 
 	it('occupancy 0 or negative', () => {

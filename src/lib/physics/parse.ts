@@ -11,6 +11,11 @@ import type { Configuration, Subshell } from './types';
 import { L_LETTERS, MAX_LETTER_L, letterToL, lLetter } from './letters';
 
 /** A configuration that cannot be read or does not exist; `token` is the offending piece of the input. */
+/** "a" or "an" before a letter or number as it is read aloud: an s, an f, a p, an 8d, an 11s. */
+function articleFor(word: string): 'a' | 'an' {
+	return /^([sfhilmnor]|8|11|18)/.test(word) ? 'an' : 'a';
+}
+
 export class ConfigurationError extends Error {
 	readonly token: string;
 	constructor(message: string, token: string) {
@@ -113,19 +118,19 @@ function checkSubshell(s: Subshell, token: string): void {
 	const letter = L_LETTERS[s.l];
 	if (s.l >= s.n) {
 		throw new ConfigurationError(
-			`a ${s.n}${letter} subshell does not exist: l must be smaller than n (${letter} means l = ${s.l}, so n must be at least ${s.l + 1})`,
+			`${articleFor(String(s.n))} ${s.n}${letter} subshell does not exist: l must be smaller than n (${letter} means l = ${s.l}, so n must be at least ${s.l + 1})`,
 			token
 		);
 	}
 	const cap = subshellCapacity(s.l);
 	if (!Number.isInteger(s.occupancy) || s.occupancy < 1) {
 		throw new ConfigurationError(
-			`occupancy ${s.occupancy} in "${token}" is not allowed: a ${letter} subshell takes 1 to ${cap} electrons (leave out empty subshells)`,
+			`occupancy ${s.occupancy} in "${token}" is not allowed: ${articleFor(letter)} ${letter} subshell takes 1 to ${cap} electrons (leave out empty subshells)`,
 			token
 		);
 	}
 	if (s.occupancy > cap) {
-		throw new ConfigurationError(`a ${letter} subshell holds at most ${cap} electrons, "${token}" has ${s.occupancy}`, token);
+		throw new ConfigurationError(`${articleFor(letter)} ${letter} subshell holds at most ${cap} electrons, "${token}" has ${s.occupancy}`, token);
 	}
 }
 
