@@ -1,13 +1,26 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
-import { couplingTable } from '$lib/physics/basis';
+import { couplingTable, MAX_J_COUPLING_TABLE } from '$lib/physics/basis';
+import { ServiceError } from '$lib/server/errors';
 import { exactJson } from '$lib/physics/exact';
 import { halfString, parseHalf } from '$lib/physics/half';
 import { api, queryParam } from '$lib/server/http';
 
 /** Coupled ↔ uncoupled table of j1 ⊗ j2 with exact coefficients: `?j1=1&j2=1/2` (each ≤ 10). */
+function momentum(text: string, name: string): number {
+	let twice: number;
+	try {
+		twice = parseHalf(text);
+	} catch {
+		throw new ServiceError(400, `${name} = "${text}" is not an integer or half-integer; write e.g. 2 or 3/2`, { field: name });
+	}
+	if (twice < 0 || twice > 2 * MAX_J_COUPLING_TABLE)
+		throw new ServiceError(400, `${name} must be from 0 to ${MAX_J_COUPLING_TABLE}, got ${text}`, { field: name });
+	return twice;
+}
+
 export const GET: RequestHandler = api((event) => {
-	const t = couplingTable(parseHalf(queryParam(event, 'j1', 10)), parseHalf(queryParam(event, 'j2', 10)));
+	const t = couplingTable(momentum(queryParam(event, 'j1', 10), 'j1'), momentum(queryParam(event, 'j2', 10), 'j2'));
 	return json({
 		j1: halfString(t.tj1),
 		j2: halfString(t.tj2),
