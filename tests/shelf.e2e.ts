@@ -76,3 +76,37 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	await owner.context.close();
 	await viewer.context.close();
 });
+
+test('from "Fe II" in the Builder to a saved, annotated and exported level table', async ({ browser }) => {
+	const { context, page } = await newUser(browser, 'Fay Flow', 'flow');
+	await page.getByLabel('Name').fill('Iron lines');
+	await page.getByRole('button', { name: 'Create project' }).click();
+	await expect(page.getByRole('heading', { name: 'Iron lines' })).toBeVisible();
+
+	await page.goto('/builder');
+	await page.getByPlaceholder('Fe II, Nd3+').fill('Fe II');
+	await page.getByRole('button', { name: 'Ground configuration' }).click();
+	// Fe II ground configuration 3d⁶4s, 420 = C(10,6)·C(2,1) microstates (NIST/CRC ion ground levels; combinatorics).
+	await expect(page.getByText('420 microstates').first()).toBeVisible();
+	await page.getByTestId('save-to-shelf').getByRole('link', { name: 'Save…' }).click();
+	await expect(page.getByLabel('Configuration')).toHaveValue('[Ar] 3d6 4s');
+	await expect(page.getByLabel('Species')).toHaveValue('Fe II');
+	await page.getByLabel('Title').fill('Fe II ground configuration');
+	await page.getByRole('button', { name: 'Save to Shelf' }).click();
+	await expect(page.getByTestId('entry-title')).toHaveText('Fe II ground configuration');
+
+	// The Hund ground level comes first in the level table.
+	const first = page.getByTestId('level-notes').locator('tbody tr').first();
+	await expect(first).toHaveAttribute('data-level', '6D#1|9/2');
+	await first.getByRole('button', { name: 'Annotate' }).click();
+	await page.getByLabel('Observed energy (cm⁻¹)').fill('0');
+	await page.locator('select[name=status]').selectOption('proposed');
+	await page.getByRole('button', { name: 'Save note' }).click();
+	await expect(first).toContainText('proposed');
+
+	const download = page.waitForEvent('download');
+	await page.getByRole('link', { name: 'CSV' }).click();
+	const file = await download;
+	expect(file.suggestedFilename()).toBe('Fe_II_Ar_3d6_4s.csv');
+	await context.close();
+});

@@ -66,7 +66,10 @@ export const shelfInputSchema = z.object({
 });
 
 export const shelfPatchSchema = shelfInputSchema.partial().extend({
-	version: z.number({ error: 'version must be the number you last read' }).int().positive()
+	version: z
+		.number({ error: 'version must be the number you last read' })
+		.int('version must be a whole number')
+		.positive('version must be the number you last read (1 or more)')
 });
 
 export const annotationInputSchema = z.object({

@@ -26,6 +26,7 @@ export function exportAnnotatedLevels(actor: Actor, projectId: string, entryId: 
 		parity: sheet.configuration.parity,
 		note: 'LS labels and Landé g are computed for pure LS coupling; real levels may be mixed. Observed energies are the project’s annotations.'
 	});
-	const slug = `${entry.species || 'levels'}-${sheet.configuration.notation}`.replace(/[^A-Za-z0-9]+/g, '_');
+	// Named after the notation as typed, so a core shorthand keeps the name short: Fe_II_Ar_3d6_4s.csv
+	const slug = `${entry.species || 'levels'}-${entry.notation}`.replace(/[^A-Za-z0-9]+/g, '_').replace(/^_|_$/g, '');
 	return { body, type: MIME[format], filename: `${slug}.${format}` };
 }
