@@ -80,3 +80,33 @@ test('GET /api/v1/microstates pages through the 15 microstates of p²', async ({
 	expect(big.status()).toBe(400);
 	expect((await big.json()).error.message).toMatch(/500/);
 });
+
+test('project routes: 401 without sign-in, 400 for a body that is not JSON, token access works', async ({ browser, request }) => {
+	const anonymous = await request.get('/api/v1/projects');
+	expect(anonymous.status()).toBe(401);
+	expect((await anonymous.json()).error.message).toMatch(/Sign in/);
+
+	const { newUser } = await import('./helpers');
+	const { context, page } = await newUser(browser, 'Api User', 'api');
+	const notJson = await page.request.post('/api/v1/projects', { headers: { 'content-type': 'application/json' }, data: Buffer.from('{name:') });
+	expect(notJson.status()).toBe(400);
+	expect((await notJson.json()).error.message).toBe('Request body must be JSON');
+	const notObject = await page.request.post('/api/v1/projects', { data: '"a string"' });
+	expect((await notObject.json()).error.message).toBe('Request body must be a JSON object');
+	const empty = await page.request.post('/api/v1/projects', { data: { name: '' } });
+	expect(await empty.json()).toEqual({ error: { message: 'Project name must not be empty', field: 'name' } });
+
+	// A personal API token acts as its owner.
+	await page.goto('/account');
+	await page.getByLabel('Name').fill('script');
+	await page.getByRole('button', { name: 'Create token' }).click();
+	const token = (await page.getByTestId('new-token').textContent())!.trim();
+	const viaToken = await request.post('/api/v1/projects', { headers: { authorization: `Bearer ${token}` }, data: { name: 'Made by a script' } });
+	expect(viaToken.status()).toBe(201);
+	const bad = await request.get('/api/v1/projects', { headers: { authorization: 'Bearer tw_wrong' } });
+	expect(bad.status()).toBe(401);
+
+	await page.goto('/projects/no-such-project');
+	await expect(page.getByRole('heading', { name: 'No such project' })).toBeVisible();
+	await context.close();
+});

@@ -89,11 +89,14 @@ export function apiActor(event: RequestEvent): Actor {
 export async function readJson(event: RequestEvent, maxBytes = 256 * 1024): Promise<unknown> {
 	const text = await event.request.text();
 	if (text.length > maxBytes) throw new ServiceError(413, `Request body is over ${maxBytes} bytes`);
+	let body: unknown;
 	try {
-		return JSON.parse(text);
+		body = JSON.parse(text);
 	} catch {
 		throw new ServiceError(400, 'Request body must be JSON');
 	}
+	if (body === null || typeof body !== 'object' || Array.isArray(body)) throw new ServiceError(400, 'Request body must be a JSON object');
+	return body;
 }
 
 /** A required query parameter, with a message naming it when missing or too long. */

@@ -53,3 +53,18 @@ describe('rate limiter', () => {
 		expect(limiter.check('k')).toBe(0);
 	});
 });
+
+describe('site roles', () => {
+	it('only an admin lists users and changes site roles; the last admin stays admin', async () => {
+		const { listUsers, setSiteRole } = await import('./services/users');
+		const { ServiceError } = await import('./errors');
+		const admin = db.select().from(users).where(eq(users.siteRole, 'admin')).get()!;
+		const adminActor = { id: admin.id, email: admin.email, name: admin.name, siteRole: admin.siteRole };
+		const member = await signUp({ name: 'Plain Member', email: 'plain@example.org', password: 'long-enough-pw' });
+		expect(() => listUsers(member)).toThrow(ServiceError);
+		expect(() => setSiteRole(adminActor, admin.id, 'member')).toThrow(/at least one admin/);
+		setSiteRole(adminActor, member.id, 'admin');
+		expect(listUsers(adminActor).find((u) => u.id === member.id)?.siteRole).toBe('admin');
+		expect(() => setSiteRole(adminActor, member.id, 'superuser')).toThrow(/admin, member/);
+	});
+});
