@@ -24,3 +24,10 @@ export function levelRefs(terms: readonly { label: string; count: number; levels
 		Array.from({ length: t.count }, (_, k) => t.levels.map((lv) => ({ term: t.label, occurrence: k + 1, J: lv.J }))).flat()
 	);
 }
+
+/** A level key as people read it: "6D J=9/2", "2D (2) J=5/2" for the second ²D. */
+export function levelText(key: string): string {
+	const ref = parseLevelKey(key);
+	if (!ref) return key;
+	return `${ref.term}${ref.occurrence > 1 ? ` (${ref.occurrence})` : ''} J=${ref.J}`;
+}

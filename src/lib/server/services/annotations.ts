@@ -11,7 +11,7 @@ import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput } from '../validation';
 import { termSheet, type TermSheet } from '../../physics/report';
-import { levelKey, levelRefs } from '../../levels';
+import { levelKey, levelRefs, levelText } from '../../levels';
 
 const annotationColumns = {
 	id: levelAnnotations.id,
@@ -93,11 +93,11 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 		} else {
 			if (data.version !== undefined && data.version !== current.version)
 				throw conflict(
-					`The note on ${data.levelKey} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
+					`The note on ${levelText(data.levelKey)} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
 					{ currentVersion: current.version }
 				);
 			if (data.version === undefined)
-				throw conflict(`The level ${data.levelKey} already has a note; send the version you last read to change it`, {
+				throw conflict(`The level ${levelText(data.levelKey)} already has a note; send the version you last read to change it`, {
 					currentVersion: current.version
 				});
 			tx.update(levelAnnotations)
