@@ -110,3 +110,16 @@ test('project routes: 401 without sign-in, 400 for a body that is not JSON, toke
 	await expect(page.getByRole('heading', { name: 'No such project' })).toBeVisible();
 	await context.close();
 });
+
+test('GET /api/v1/jj refuses to list over 20000 levels and counts them by J instead', async ({ request }) => {
+	const many = await request.get('/api/v1/jj?config=' + encodeURIComponent('4f7 5d2 6p'));
+	expect(many.status()).toBe(400);
+	expect((await many.json()).error.message).toMatch(/counts=only/);
+	const counts = await (await request.get('/api/v1/jj?counts=only&config=' + encodeURIComponent('4f7 5d2 6p'))).json();
+	// Σ over J of the level counts = number of LS levels; Σ (2J+1)·n_J = 926,640 microstates = C(14,7)·C(10,2)·C(6,1).
+	const states = Object.entries(counts.countsByJ as Record<string, number>).reduce((sum, [J, n]) => {
+		const twoJ = J.endsWith('/2') ? Number(J.slice(0, -2)) : 2 * Number(J);
+		return sum + (twoJ + 1) * n;
+	}, 0);
+	expect(states).toBe(926640);
+});

@@ -333,7 +333,7 @@ export function jjLevels(input: Configuration | readonly Subshell[]): JjLevel[] 
 	for (const n of jjLevelCountsByJ(subshells).values()) total += BigInt(n);
 	if (total > BigInt(MAX_JJ_LEVELS)) {
 		throw new RangeError(
-			`this configuration has ${total} jj levels; at most ${MAX_JJ_LEVELS} can be listed (counts by J are still available)`
+			`this configuration has ${total} jj levels; at most ${MAX_JJ_LEVELS} can be listed (counts by J come from jjLevelCountsByJ without listing)`
 		);
 	}
 	const open = subshells.filter((s) => s.occupancy < subshellCapacity(s.l));
