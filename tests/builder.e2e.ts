@@ -149,3 +149,18 @@ test('the State grid peels the terms off one by one until it is empty', async ({
 	await expect(page.getByTestId('peel-status')).toContainText('3 of 3 terms taken out — the grid is empty');
 	await expect(page.getByTestId('peel-next')).toBeDisabled();
 });
+
+test('the microstates themselves are listed only on request, a page at a time', async ({ page }) => {
+	await page.goto('/builder?config=' + encodeURIComponent('3d2'));
+	// d²: C(10,2) = 45 microstates (combinatorics), so a page of 50 holds them all; 2p 3d: 6·10 = 60 needs two.
+	await page.getByRole('tab', { name: 'State grid' }).click();
+	const list = page.getByTestId('microstate-list');
+	await list.getByText('List the microstates themselves').click();
+	await expect(list).toContainText('1–45 of 45');
+	await expect(list.locator('tbody tr')).toHaveCount(45);
+	await page.getByLabel('Notation').fill('2p 3d');
+	await expect(list).toContainText('1–50 of 60');
+	await list.getByRole('button', { name: 'Next' }).click();
+	await expect(list).toContainText('51–60 of 60');
+	await shot(page, 'builder-microstates');
+});
