@@ -32,6 +32,9 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	await page.reload();
 	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('adopted zero (test value)');
 	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('Ola Owner');
+	// A level with an observed energy appears on the cm⁻¹ diagram.
+	await expect(page.getByTestId('observed-diagram-svg')).toBeVisible();
+	await expect(page.getByTestId('observed-diagram-svg')).toHaveAttribute('aria-label', /⁶D₉\/₂ at 0 \(confirmed\)/);
 	await shot(page, 'shelf-entry-levels');
 
 	// Exports carry the note.
