@@ -164,3 +164,17 @@ test('the microstates themselves are listed only on request, a page at a time', 
 	await expect(list).toContainText('51–60 of 60');
 	await shot(page, 'builder-microstates');
 });
+
+test('on a touch screen, taps add chips and step the occupancy (tablet width)', async ({ browser }) => {
+	const context = await browser.newContext({ hasTouch: true, isMobile: true, viewport: { width: 768, height: 1024 } });
+	const page = await context.newPage();
+	await page.goto('/builder');
+	await tray(page, '3d').tap();
+	await tray(page, '4s').tap();
+	await expect(railChip(page, '3d')).toBeVisible();
+	const plus = railChip(page, '3d').getByRole('button', { name: /increase|more|\+/i });
+	for (let i = 0; i < 4; i++) await plus.tap();
+	await expectCr(page);
+	await shot(page, 'builder-tablet-touch');
+	await context.close();
+});
