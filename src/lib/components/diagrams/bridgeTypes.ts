@@ -1,5 +1,6 @@
 /** The JSON of `/api/v1/bridge` as the Coupling bridge reads it. */
 export interface BridgeResponse {
+	configuration: { notation: string; pretty: string; parity: 'even' | 'odd' };
 	schematic: boolean;
 	ls: { label: string; J: string }[];
 	jj: { label: string; J: string; group: string; subshells: string; spinOrbitWeight: number }[];

@@ -1,14 +1,16 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
-import { parseConfiguration } from '$lib/physics/parse';
+import { formatConfiguration, parseConfiguration } from '$lib/physics/parse';
 import { couplingBridge } from '$lib/physics/bridge';
 import { halfString } from '$lib/physics/half';
 import { api, queryParam } from '$lib/server/http';
 
 /** LS ↔ jj correlation by J (non-crossing rule), both sides in schematic order: `?config=2p 3p`. */
 export const GET: RequestHandler = api((event) => {
-	const b = couplingBridge(parseConfiguration(queryParam(event, 'config')));
+	const cfg = parseConfiguration(queryParam(event, 'config'));
+	const b = couplingBridge(cfg);
 	return json({
+		configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },
 		schematic: true,
 		ls: b.ls.map((x) => ({ label: x.label, J: halfString(x.twoJ) })),
 		jj: b.jj.map((x) => ({ label: x.label, J: halfString(x.twoJ), group: x.level.couplingLabel, subshells: x.level.subshellLabel, spinOrbitWeight: x.spinOrbitWeight })),
