@@ -92,7 +92,8 @@ test('from "Fe II" in the Builder to a saved, annotated and exported level table
 	// Fe II ground configuration 3d⁶4s, 420 = C(10,6)·C(2,1) microstates (NIST/CRC ion ground levels; combinatorics).
 	await expect(page.getByText('420 microstates').first()).toBeVisible();
 	await page.getByTestId('save-to-shelf').getByRole('link', { name: 'Save…' }).click();
-	await expect(page.getByLabel('Configuration')).toHaveValue('[Ar] 3d6 4s');
+	await expect(page).toHaveURL(/\/shelf\/new\?/);
+	await expect(page.getByLabel('Configuration', { exact: true })).toHaveValue('[Ar] 3d6 4s');
 	await expect(page.getByLabel('Species')).toHaveValue('Fe II');
 	await page.getByLabel('Title').fill('Fe II ground configuration');
 	await page.getByRole('button', { name: 'Save to Shelf' }).click();
