@@ -5,9 +5,10 @@
  */
 import { and, eq, sql } from 'drizzle-orm';
 import { db } from '../db';
-import { levelAnnotations, shelfEntries, users } from '../db/schema';
+import { levelAnnotations, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound } from '../errors';
+import { readEntry } from './shelf';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput } from '../validation';
 import { termSheet, type TermSheet } from '../../physics/report';
@@ -27,30 +28,20 @@ const annotationColumns = {
 
 export type Annotation = ReturnType<typeof readAnnotations>[number];
 
-function entryOf(projectId: string, entryId: string) {
-	const entry = db
-		.select({ id: shelfEntries.id, notation: shelfEntries.notation, title: shelfEntries.title, species: shelfEntries.species })
-		.from(shelfEntries)
-		.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.projectId, projectId)))
-		.get();
-	if (!entry) throw notFound('No such Shelf entry in this project');
-	return entry;
-}
-
 function readAnnotations(entryId: string) {
 	return db.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.entryId, entryId)).all();
 }
 
 export function listAnnotations(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'viewer');
-	entryOf(projectId, entryId);
+	readEntry(projectId, entryId);
 	return readAnnotations(entryId);
 }
 
 /** The entry's Term sheet with each level's annotation (or null), for the page and the exports. */
 export function annotatedLevels(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'viewer');
-	const entry = entryOf(projectId, entryId);
+	const entry = readEntry(projectId, entryId);
 	const sheet: TermSheet = termSheet(entry.notation);
 	const notes = new Map(readAnnotations(entryId).map((a) => [a.levelKey, a]));
 	const byTerm = new Map(sheet.terms.map((t) => [t.label, t]));
@@ -68,7 +59,7 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 export function saveAnnotation(actor: Actor, projectId: string, entryId: string, input: unknown) {
 	projectAccess(actor, projectId, 'editor');
 	const data = parseInput(annotationInputSchema, input);
-	const entry = entryOf(projectId, entryId);
+	const entry = readEntry(projectId, entryId);
 	const known = new Set(levelRefs(termSheet(entry.notation).terms).map(levelKey));
 	if (!known.has(data.levelKey))
 		throw badRequest(`"${data.levelKey}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`, {
@@ -115,7 +106,7 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 
 export function deleteAnnotation(actor: Actor, projectId: string, entryId: string, levelKeyText: string) {
 	projectAccess(actor, projectId, 'editor');
-	entryOf(projectId, entryId);
+	readEntry(projectId, entryId);
 	const result = db
 		.delete(levelAnnotations)
 		.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.levelKey, levelKeyText)))

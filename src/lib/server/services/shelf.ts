@@ -47,7 +47,8 @@ const entryColumns = {
 
 export type ShelfEntry = ReturnType<typeof readEntry>;
 
-function readEntry(projectId: string, entryId: string) {
+/** An entry of this project, or 404. Callers check the role first. */
+export function readEntry(projectId: string, entryId: string) {
 	const row = db
 		.select(entryColumns)
 		.from(shelfEntries)

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { deleteEntry, getEntry, updateEntry } from '$lib/server/services/shelf';
+import { deleteEntry, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, saveAnnotation } from '$lib/server/services/annotations';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { shelfFieldsFrom } from '$lib/server/forms';
@@ -8,9 +8,8 @@ import { shelfFieldsFrom } from '$lib/server/forms';
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
 	const { projectId, entryId } = event.params;
-	const entry = forPage(() => getEntry(user, projectId, entryId));
-	const { sheet, levels } = forPage(() => annotatedLevels(user, projectId, entryId));
-	return { entry, sheet, levels };
+	// One role check and one read of the entry: annotatedLevels returns the entry with its levels.
+	return forPage(() => annotatedLevels(user, projectId, entryId));
 };
 
 /** '' → null; anything else must read as a number (zod then says what is allowed). */
