@@ -14,6 +14,7 @@ describe('exports', () => {
 		expect(toCsv([{ name: 'a, "b"', value: 1 }], columns)).toBe('name,value\r\n"a, ""b""",1');
 	});
 
+	// The ten LaTeX special characters (Lamport, LaTeX user's guide); booktabs rules (booktabs package manual).
 	it('LaTeX escapes the ten specials and uses booktabs rules', () => {
 		expect(latexEscape('50% of $x_1 & {y}#')).toBe('50\\% of \\$x\\_1 \\& \\{y\\}\\#');
 		const tex = toLatex([{ name: 'x_1', value: null }], columns, 'Test');

@@ -24,4 +24,3 @@ declare module 'lucia' {
 	}
 }
 
-export { hashPassword, verifyPassword } from './password';

@@ -14,7 +14,6 @@ export class ServiceError extends Error {
 }
 
 export const notFound = (what = 'Not found') => new ServiceError(404, what);
-export const forbidden = (message: string) => new ServiceError(403, message);
 export const badRequest = (message: string, details: Record<string, unknown> = {}) =>
 	new ServiceError(400, message, details);
 export const conflict = (message: string, details: Record<string, unknown> = {}) =>

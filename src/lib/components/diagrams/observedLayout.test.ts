@@ -14,6 +14,7 @@ const level = (term: string, J: string, energy: number) => ({
 	status: 'confirmed' as const
 });
 
+// Drawing geometry only; the 1-2-5 tick steps are common practice, no source.
 describe('observed level diagram layout (geometry, no physics)', () => {
 	it('round tick steps: 1, 2, 5 × 10^k', () => {
 		expect(tickStep(43000)).toBe(10000);

@@ -26,8 +26,6 @@ const annotationColumns = {
 	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.updatedBy})`
 };
 
-export type Annotation = ReturnType<typeof readAnnotations>[number];
-
 function readAnnotations(entryId: string) {
 	return db.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.entryId, entryId)).all();
 }

@@ -45,8 +45,6 @@ const entryColumns = {
 	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${shelfEntries.updatedBy})`
 };
 
-export type ShelfEntry = ReturnType<typeof readEntry>;
-
 /** An entry of this project, or 404. Callers check the role first. */
 export function readEntry(projectId: string, entryId: string) {
 	const row = db
