@@ -39,7 +39,8 @@ export const OBSERVED_GEOMETRY = {
 	axisX: 78,
 	columnWidth: 92,
 	barWidth: 44,
-	minLabelGap: 12
+	minLabelGap: 12,
+	minWidth: 520
 };
 
 /** Round tick steps 1, 2, 5 × 10^k giving about `target` ticks over `span`. */
@@ -90,7 +91,8 @@ export function observedLayout(levels: readonly ObservedLevelInput[]) {
 		columns,
 		ticks,
 		shift,
-		width: G.axisX + 24 + Math.max(1, columns.length) * G.columnWidth + 16,
+		// Wide enough for the title even with a single column.
+		width: Math.max(G.minWidth, G.axisX + 24 + columns.length * G.columnWidth + 16),
 		height: G.top + G.plotHeight + G.bottom + shift
 	};
 }
