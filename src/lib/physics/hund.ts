@@ -78,7 +78,12 @@ export function hundGround(input: Configuration | readonly Subshell[]): HundGrou
 	const subshells = asSubshells(input);
 	const open = openSubshells(subshells);
 	if (open.length === 0) {
-		return { term: { twoS: 0, L: 0 }, twoJ: 0, rigorous: true, reason: 'All subshells are closed: the only term is ¹S and its level is J = 0.' };
+		return {
+			term: { twoS: 0, L: 0 },
+			twoJ: 0,
+			rigorous: true,
+			reason: 'All subshells are closed: the only term is ¹S and its level is J = 0.'
+		};
 	}
 	const terms = termsOf(subshells);
 	const ground = pickGroundTerm(terms);

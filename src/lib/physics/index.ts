@@ -26,7 +26,17 @@ export { hundGround, hundOrder, HUND_CAUTION } from './hund';
 export { listMicrostates, iterateMicrostates } from './listing';
 export { termsByEnumeration } from './enumerate';
 export { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from './jj';
-export { wigner3j, wigner6j, wigner9j, clebschGordan, wigner3jFloat, wigner6jFloat, wigner9jFloat, clebschGordanFloat, evaluateSymbol } from './wigner';
+export {
+	wigner3j,
+	wigner6j,
+	wigner9j,
+	clebschGordan,
+	wigner3jFloat,
+	wigner6jFloat,
+	wigner9jFloat,
+	clebschGordanFloat,
+	evaluateSymbol
+} from './wigner';
 export { exactToNumber, exactString, exactSquaredString, exactJson, type ExactSqrt } from './exact';
 export { couplingTable, MAX_J_COUPLING_TABLE } from './basis';
 export { couplingBridge, jjSpinOrbitWeight } from './bridge';

@@ -33,7 +33,13 @@ describe('reading configurations', () => {
 		expect(cfg.parity).toBe('even');
 		expect(cfg.core).toBeNull();
 		expect(cfg.subshells.map((s) => [s.n, s.l, s.occupancy])).toEqual([
-			[1, 0, 2], [2, 0, 2], [2, 1, 6], [3, 0, 2], [3, 1, 6], [3, 2, 5], [4, 0, 1]
+			[1, 0, 2],
+			[2, 0, 2],
+			[2, 1, 6],
+			[3, 0, 2],
+			[3, 1, 6],
+			[3, 2, 5],
+			[4, 0, 1]
 		]);
 	});
 
@@ -56,7 +62,10 @@ describe('reading configurations', () => {
 	it('2p5 3p leaves out occupancy 1 and has even parity', () => {
 		// Parity (−1)^(5·1 + 1·1) = +1 (Condon & Shortley 1935; general fact).
 		const cfg = parseConfiguration('2p5 3p');
-		expect(cfg.subshells).toEqual([{ n: 2, l: 1, occupancy: 5 }, { n: 3, l: 1, occupancy: 1 }]);
+		expect(cfg.subshells).toEqual([
+			{ n: 2, l: 1, occupancy: 5 },
+			{ n: 3, l: 1, occupancy: 1 }
+		]);
 		expect(cfg.parity).toBe('even');
 	});
 
@@ -82,7 +91,10 @@ describe('reading configurations', () => {
 	});
 
 	it('high-l letters k, l … v are read, with n up to 20', () => {
-		expect(parseConfiguration('8k 9l2').subshells).toEqual([{ n: 8, l: 7, occupancy: 1 }, { n: 9, l: 8, occupancy: 2 }]);
+		expect(parseConfiguration('8k 9l2').subshells).toEqual([
+			{ n: 8, l: 7, occupancy: 1 },
+			{ n: 9, l: 8, occupancy: 2 }
+		]);
 		expect(parseConfiguration('20v').subshells[0].l).toBe(16);
 	});
 });
@@ -204,7 +216,11 @@ describe('writing configurations', () => {
 	it('writing then reading gives back the same configuration (random configurations)', () => {
 		const subshell = fc
 			.integer({ min: 1, max: 20 })
-			.chain((n) => fc.integer({ min: 0, max: Math.min(n - 1, 16) }).chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy }))));
+			.chain((n) =>
+				fc
+					.integer({ min: 0, max: Math.min(n - 1, 16) })
+					.chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy })))
+			);
 		const list = fc.uniqueArray(subshell, { minLength: 1, maxLength: 8, selector: (s) => `${s.n},${s.l}` });
 		fc.assert(
 			fc.property(list, fc.boolean(), fc.boolean(), (subshells, superscripts, compactCore) => {
@@ -219,7 +235,13 @@ describe('writing configurations', () => {
 
 describe('checked subshell lists', () => {
 	it('configurationOf sorts, counts electrons and checks each subshell', () => {
-		const cfg = configurationOf([{ n: 4, l: 0, occupancy: 1 }, { n: 3, l: 2, occupancy: 5 }], 'Ar');
+		const cfg = configurationOf(
+			[
+				{ n: 4, l: 0, occupancy: 1 },
+				{ n: 3, l: 2, occupancy: 5 }
+			],
+			'Ar'
+		);
 		expect(cfg.electrons).toBe(24);
 		expect(cfg.core).toBe('Ar');
 		expect(() => configurationOf([{ n: 2, l: 2, occupancy: 1 }])).toThrow(ConfigurationError);

@@ -42,11 +42,30 @@ function buildCores(): Record<string, Subshell[]> {
 		...extra.map(([n, l]) => ({ n, l, occupancy: 4 * l + 2 }))
 	];
 	const He = add([], [[1, 0]]);
-	const Ne = add(He, [[2, 0], [2, 1]]);
-	const Ar = add(Ne, [[3, 0], [3, 1]]);
-	const Kr = add(Ar, [[3, 2], [4, 0], [4, 1]]);
-	const Xe = add(Kr, [[4, 2], [5, 0], [5, 1]]);
-	const Rn = add(Xe, [[4, 3], [5, 2], [6, 0], [6, 1]]);
+	const Ne = add(He, [
+		[2, 0],
+		[2, 1]
+	]);
+	const Ar = add(Ne, [
+		[3, 0],
+		[3, 1]
+	]);
+	const Kr = add(Ar, [
+		[3, 2],
+		[4, 0],
+		[4, 1]
+	]);
+	const Xe = add(Kr, [
+		[4, 2],
+		[5, 0],
+		[5, 1]
+	]);
+	const Rn = add(Xe, [
+		[4, 3],
+		[5, 2],
+		[6, 0],
+		[6, 1]
+	]);
 	const cores: Record<string, Subshell[]> = { He, Ne, Ar, Kr, Xe, Rn };
 	for (const k of Object.keys(cores)) {
 		cores[k] = cores[k].sort(bySubshellOrder);
@@ -130,7 +149,10 @@ function checkSubshell(s: Subshell, token: string): void {
 		);
 	}
 	if (s.occupancy > cap) {
-		throw new ConfigurationError(`${articleFor(letter)} ${letter} subshell holds at most ${cap} electrons, "${token}" has ${s.occupancy}`, token);
+		throw new ConfigurationError(
+			`${articleFor(letter)} ${letter} subshell holds at most ${cap} electrons, "${token}" has ${s.occupancy}`,
+			token
+		);
 	}
 }
 
@@ -138,10 +160,7 @@ function coreOf(name: string, token: string): { name: string; subshells: readonl
 	const key = name.charAt(0).toUpperCase() + name.slice(1).toLowerCase();
 	const subshells = NOBLE_GAS_CORES[key];
 	if (!subshells) {
-		throw new ConfigurationError(
-			`${token} is not a noble-gas core: use ${CORE_NAMES.map((c) => `[${c}]`).join(' ')}`,
-			token
-		);
+		throw new ConfigurationError(`${token} is not a noble-gas core: use ${CORE_NAMES.map((c) => `[${c}]`).join(' ')}`, token);
 	}
 	return { name: key, subshells };
 }
@@ -277,7 +296,12 @@ export function parseConfiguration(text: string): Configuration {
 			const letter = m[2];
 			const l = letterToL(letter);
 			if (l === null) {
-				const hint = letterToL(letter.toLowerCase()) !== null ? ' (subshell letters are lowercase)' : letter.toLowerCase() === 'j' ? ' (j is skipped)' : '';
+				const hint =
+					letterToL(letter.toLowerCase()) !== null
+						? ' (subshell letters are lowercase)'
+						: letter.toLowerCase() === 'j'
+							? ' (j is skipped)'
+							: '';
 				throw new ConfigurationError(
 					`"${letter}" in "${token}" is not a subshell letter${hint}: use ${L_LETTERS.split('').join(' ')}`,
 					token
@@ -286,7 +310,12 @@ export function parseConfiguration(text: string): Configuration {
 			const raw = m[3] ?? m[4] ?? (m[5] === '' ? undefined : m[5]);
 			const occupancy =
 				m[6] !== undefined
-					? Number(m[6].split('').map((ch) => SUPERSCRIPT_DIGITS.indexOf(ch)).join(''))
+					? Number(
+							m[6]
+								.split('')
+								.map((ch) => SUPERSCRIPT_DIGITS.indexOf(ch))
+								.join('')
+						)
 					: raw === undefined
 						? 1
 						: Number(raw);

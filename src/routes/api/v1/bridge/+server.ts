@@ -13,7 +13,13 @@ export const GET: RequestHandler = api((event) => {
 		configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },
 		schematic: true,
 		ls: b.ls.map((x) => ({ label: x.label, J: halfString(x.twoJ) })),
-		jj: b.jj.map((x) => ({ label: x.label, J: halfString(x.twoJ), group: x.level.couplingLabel, subshells: x.level.subshellLabel, spinOrbitWeight: x.spinOrbitWeight })),
+		jj: b.jj.map((x) => ({
+			label: x.label,
+			J: halfString(x.twoJ),
+			group: x.level.couplingLabel,
+			subshells: x.level.subshellLabel,
+			spinOrbitWeight: x.spinOrbitWeight
+		})),
 		links: b.links.map((l) => ({ J: halfString(l.twoJ), ls: l.ls, jj: l.jj }))
 	});
 });

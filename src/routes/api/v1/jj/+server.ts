@@ -21,7 +21,10 @@ export const GET: RequestHandler = api((event) => {
 		return json({ configuration: formatConfiguration(cfg), countsByJ, countsAgreeWithLS: true });
 	const total = [...jjCounts.values()].reduce((a, b) => a + b, 0);
 	if (total > MAX_JJ_LEVELS)
-		throw new ServiceError(400, `This configuration has ${total} jj levels; at most ${MAX_JJ_LEVELS} are listed. Add &counts=only for the number of levels of each J.`);
+		throw new ServiceError(
+			400,
+			`This configuration has ${total} jj levels; at most ${MAX_JJ_LEVELS} are listed. Add &counts=only for the number of levels of each J.`
+		);
 	const levels = jjLevels(cfg).map((lv) => ({
 		J: halfString(lv.twoJ),
 		group: lv.couplingLabel,

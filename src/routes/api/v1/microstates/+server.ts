@@ -17,7 +17,8 @@ export const GET: RequestHandler = api((event) => {
 	const offsetText = event.url.searchParams.get('offset') ?? '0';
 	const limitText = event.url.searchParams.get('limit') ?? '50';
 	if (!/^\d{1,30}$/.test(offsetText)) throw new ServiceError(400, 'offset must be a whole number ≥ 0');
-	if (!/^\d{1,3}$/.test(limitText) || Number(limitText) > MAX_PAGE) throw new ServiceError(400, `limit must be a whole number from 0 to ${MAX_PAGE}`);
+	if (!/^\d{1,3}$/.test(limitText) || Number(limitText) > MAX_PAGE)
+		throw new ServiceError(400, `limit must be a whole number from 0 to ${MAX_PAGE}`);
 	const page = listMicrostates(cfg, { offset: BigInt(offsetText), limit: Number(limitText) });
 	return json({
 		total: page.total.toString(),

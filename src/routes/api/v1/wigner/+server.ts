@@ -14,7 +14,9 @@ export const GET: RequestHandler = api((event) => {
 	const symbol = queryParam(event, 'symbol', 4);
 	if (!(KINDS as readonly string[]).includes(symbol))
 		throw new ServiceError(400, `symbol must be one of ${KINDS.join(', ')} (j ≤ ${MAX_J_SYMBOL}; 9j: j ≤ ${MAX_J_9J})`);
-	const args = queryParam(event, 'args', 200).split(',').map((s) => s.trim());
+	const args = queryParam(event, 'args', 200)
+		.split(',')
+		.map((s) => s.trim());
 	const v = evaluateSymbol(symbol as (typeof KINDS)[number], args);
 	return json({ symbol, args, value: v.value, exact: v.exact, text: v.text });
 });

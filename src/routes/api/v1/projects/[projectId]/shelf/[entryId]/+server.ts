@@ -3,9 +3,7 @@ import type { RequestHandler } from './$types';
 import { deleteEntry, getEntry, updateEntry } from '$lib/server/services/shelf';
 import { api, apiActor, readJson } from '$lib/server/http';
 
-export const GET: RequestHandler = api((event) =>
-	json({ entry: getEntry(apiActor(event), event.params.projectId, event.params.entryId) })
-);
+export const GET: RequestHandler = api((event) => json({ entry: getEntry(apiActor(event), event.params.projectId, event.params.entryId) }));
 
 /** Body: the fields to change plus `version`, the version you last read (stale versions get 409). */
 export const PATCH: RequestHandler = api(async (event) => {
