@@ -83,7 +83,9 @@ export function main(): void {
 	const rand = random(20260412);
 	const levels = inventLevels(rand);
 	const lines = inventLines(levels, rand);
-	console.log(`Line matcher: ${LINES.toLocaleString('en-US')} lines against ${LEVELS.toLocaleString('en-US')} levels, types ${TYPES.join('+')}, tolerance 2 × combined uncertainty`);
+	console.log(
+		`Line matcher: ${LINES.toLocaleString('en-US')} lines against ${LEVELS.toLocaleString('en-US')} levels, types ${TYPES.join('+')}, tolerance 2 × combined uncertainty`
+	);
 	console.log(`Node ${process.version}; medians; invented data (seeded).\n`);
 
 	let transitions = 0;
@@ -101,12 +103,26 @@ export function main(): void {
 	const n = (x: number) => x.toLocaleString('en-US');
 
 	console.log(['method', 'lines', 'wall ms', 'CPU ms', 'note'].join(' | '));
-	console.log(['build + sort table', '—', table.wall.toFixed(0), table.cpu.toFixed(0), `${n(transitions)} allowed transitions`].join(' | '));
 	console.log(
-		['sorted + binary search (matchLines)', n(LINES), match.wall.toFixed(0), match.cpu.toFixed(0), `includes the table; ${n(explained)} lines explained, ${n(unobserved)} strong unobserved predictions`].join(' | ')
+		['build + sort table', '—', table.wall.toFixed(0), table.cpu.toFixed(0), `${n(transitions)} allowed transitions`].join(' | ')
 	);
 	console.log(
-		['brute force (every pair per line)', n(BRUTE_SAMPLE), brute.wall.toFixed(0), brute.cpu.toFixed(0), `scaled to ${n(LINES)} lines: ${(scaled(brute.wall) / 1000).toFixed(0)} s wall, ${(scaled(brute.cpu) / 1000).toFixed(0)} s CPU`].join(' | ')
+		[
+			'sorted + binary search (matchLines)',
+			n(LINES),
+			match.wall.toFixed(0),
+			match.cpu.toFixed(0),
+			`includes the table; ${n(explained)} lines explained, ${n(unobserved)} strong unobserved predictions`
+		].join(' | ')
+	);
+	console.log(
+		[
+			'brute force (every pair per line)',
+			n(BRUTE_SAMPLE),
+			brute.wall.toFixed(0),
+			brute.cpu.toFixed(0),
+			`scaled to ${n(LINES)} lines: ${(scaled(brute.wall) / 1000).toFixed(0)} s wall, ${(scaled(brute.cpu) / 1000).toFixed(0)} s CPU`
+		].join(' | ')
 	);
 	console.log(`\nRatio brute force / sorted search (full list, CPU): ${n(Math.round(scaled(brute.cpu) / match.cpu))}×`);
 	console.log(

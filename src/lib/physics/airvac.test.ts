@@ -20,22 +20,22 @@ const HAND_TOLERANCE_A = 1e-9;
 const TABLE_TOLERANCE_A = 0.015;
 
 describe('refractive index of standard air, Morton (2000) form', () => {
-	// Each value computed by hand with `bc -l` at 30 digits from
+	// Each value computed by hand with `bc -l` at 30 digits (written here to 16 digits) from
 	// n − 1 = 8.34254e-5 + 2.406147e-2/(130 − s²) + 1.5998e-4/(38.9 − s²), s = 10⁴/λ_vac (Morton 2000, ApJS 130, 403).
 	it.each([
-		[2000, 0.000324091609660842754],
-		[5000, 0.000278973401773775413],
-		[10000, 0.000274169531435233479],
-		[30000, 0.000272796338132737267]
+		[2000, 0.0003240916096608428],
+		[5000, 0.0002789734017737754],
+		[10000, 0.0002741695314352335],
+		[30000, 0.0002727963381327373]
 	])('n − 1 at λ_vac = %d Å is %f', (lambda, nMinusOne) => {
 		expect(airRefractiveIndex(lambda) - 1).toBeCloseTo(nMinusOne, 15);
 	});
 
 	it.each([
-		[2000, 1999.352026783361112],
-		[5000, 4998.605522013398744],
-		[10000, 9997.259056168933519],
-		[30000, 29991.818341782419492]
+		[2000, 1999.352026783361],
+		[5000, 4998.605522013399],
+		[10000, 9997.259056168934],
+		[30000, 29991.81834178242]
 	])('vacuum %d Å is %f Å in air (hand computation from the same formula)', (vac, air) => {
 		expect(Math.abs(vacuumToAir(vac) - air)).toBeLessThan(HAND_TOLERANCE_A);
 		expect(Math.abs(airToVacuum(air) - vac)).toBeLessThan(AIR_TO_VACUUM_TOLERANCE_A);
@@ -110,10 +110,15 @@ describe('round trips (property tests)', () => {
 	});
 	it('every unit converts back to the same vacuum wavelength', () => {
 		fc.assert(
-			fc.property(vacRange, fc.constantFrom('A', 'nm', 'um', 'cm-1' as const), fc.constantFrom('air', 'vacuum' as const), (v, unit, medium) => {
-				const back = toVacuumAngstrom(fromVacuumAngstrom(v, unit, medium), unit, medium);
-				return Math.abs(back - v) < 1e-5;
-			})
+			fc.property(
+				vacRange,
+				fc.constantFrom('A', 'nm', 'um', 'cm-1' as const),
+				fc.constantFrom('air', 'vacuum' as const),
+				(v, unit, medium) => {
+					const back = toVacuumAngstrom(fromVacuumAngstrom(v, unit, medium), unit, medium);
+					return Math.abs(back - v) < 1e-5;
+				}
+			)
 		);
 	});
 });

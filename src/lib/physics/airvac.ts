@@ -146,7 +146,8 @@ export function wavenumberOf(vacuumA: number): number {
  * @example vacuumWavelengthOf(20000) // 5000
  */
 export function vacuumWavelengthOf(wavenumber: number): number {
-	if (!Number.isFinite(wavenumber) || wavenumber <= 0) throw new RangeError(`the wavenumber must be a positive number of cm⁻¹, got ${wavenumber}`);
+	if (!Number.isFinite(wavenumber) || wavenumber <= 0)
+		throw new RangeError(`the wavenumber must be a positive number of cm⁻¹, got ${wavenumber}`);
 	return ANGSTROM_PER_CM / wavenumber;
 }
 

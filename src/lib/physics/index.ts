@@ -69,4 +69,12 @@ export {
 	type SpectralLevel,
 	type Transition
 } from './transitions';
-export { matchLines, matchLinesBruteForce, transitionTable, MAX_MATCH_LEVELS, MAX_MATCH_LINES, MAX_MATCH_TRANSITIONS, type MatchResult } from './matcher';
+export {
+	matchLines,
+	matchLinesBruteForce,
+	transitionTable,
+	MAX_MATCH_LEVELS,
+	MAX_MATCH_LINES,
+	MAX_MATCH_TRANSITIONS,
+	type MatchResult
+} from './matcher';

@@ -47,7 +47,8 @@ describe('the matcher finds every line of a synthetic line list', () => {
 	const pairs: { lower: number; upper: number }[] = [];
 	for (let i = 0; i < LEVELS.length; i++)
 		for (let j = 0; j < LEVELS.length; j++)
-			if (LEVELS[j].energy > LEVELS[i].energy && jParityAllows('E1', LEVELS[i].twoJ, LEVELS[i].parity, LEVELS[j].twoJ, LEVELS[j].parity)) pairs.push({ lower: i, upper: j });
+			if (LEVELS[j].energy > LEVELS[i].energy && jParityAllows('E1', LEVELS[i].twoJ, LEVELS[i].parity, LEVELS[j].twoJ, LEVELS[j].parity))
+				pairs.push({ lower: i, upper: j });
 	// Deterministic "noise" of up to ±0.015 cm⁻¹, inside the combined 2σ tolerance 2·√(0.01² + 0.02² + 0.02²) = 0.06 cm⁻¹.
 	const lines = pairs.map((p, k) => lineFor(LEVELS[p.upper].energy - LEVELS[p.lower].energy + 0.015 * Math.sin(7 * k + 1)));
 
@@ -114,9 +115,14 @@ describe('no candidate breaks the selection rules or the tolerance (property)', 
 		fc.assert(
 			fc.property(
 				fc.array(levelArb, { minLength: 2, maxLength: 12 }),
-				fc.array(fc.record({ sigma: fc.double({ min: 1, max: 5000, noNaN: true }), u: fc.double({ min: 0, max: 2, noNaN: true }) }), { maxLength: 10 }),
+				fc.array(fc.record({ sigma: fc.double({ min: 1, max: 5000, noNaN: true }), u: fc.double({ min: 0, max: 2, noNaN: true }) }), {
+					maxLength: 10
+				}),
 				typesArb,
-				fc.oneof(fc.constant({ kind: 'combined' as const }), fc.record({ kind: fc.constant('cm-1' as const), value: fc.double({ min: 0, max: 200, noNaN: true }) })),
+				fc.oneof(
+					fc.constant({ kind: 'combined' as const }),
+					fc.record({ kind: fc.constant('cm-1' as const), value: fc.double({ min: 0, max: 200, noNaN: true }) })
+				),
 				(levels, raw, types, tolerance) => {
 					const lines: ObservedLine[] = raw.map((r) => ({ wavelength: r.sigma, unit: 'cm-1', medium: 'vacuum', uncertainty: r.u }));
 					const fast = matchLines(levels, lines, { types, tolerance, maxCandidates: 500 });

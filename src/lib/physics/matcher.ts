@@ -127,11 +127,13 @@ export interface TransitionTable {
 
 function checkLevels(levels: readonly MatchLevel[]): void {
 	if (!Array.isArray(levels)) throw new RangeError('levels must be a list');
-	if (levels.length > MAX_MATCH_LEVELS) throw new RangeError(`${levels.length} levels given; the matcher accepts at most ${MAX_MATCH_LEVELS}`);
+	if (levels.length > MAX_MATCH_LEVELS)
+		throw new RangeError(`${levels.length} levels given; the matcher accepts at most ${MAX_MATCH_LEVELS}`);
 	levels.forEach((l, i) => {
 		if (!Number.isFinite(l.energy)) throw new RangeError(`level ${i}: the energy must be a finite number of cm⁻¹, got ${l.energy}`);
 		if (!Number.isInteger(l.twoJ) || l.twoJ < 0) throw new RangeError(`level ${i}: 2J must be a non-negative integer, got ${l.twoJ}`);
-		if (l.parity !== 'even' && l.parity !== 'odd') throw new RangeError(`level ${i}: parity must be "even" or "odd", got "${String(l.parity)}"`);
+		if (l.parity !== 'even' && l.parity !== 'odd')
+			throw new RangeError(`level ${i}: parity must be "even" or "odd", got "${String(l.parity)}"`);
 		if (l.uncertainty != null && (!Number.isFinite(l.uncertainty) || l.uncertainty < 0)) {
 			throw new RangeError(`level ${i}: the uncertainty must be a number ≥ 0 (cm⁻¹), got ${l.uncertainty}`);
 		}
@@ -172,7 +174,9 @@ export function transitionTable(levels: readonly MatchLevel[], types: readonly T
 	const chosen = checkTransitionTypes(types);
 	const expected = countAllowedTransitions(levels, chosen);
 	if (expected > MAX_MATCH_TRANSITIONS) {
-		throw new RangeError(`these levels allow ${expected} transitions of the chosen types; the matcher handles at most ${MAX_MATCH_TRANSITIONS} — use fewer levels or types`);
+		throw new RangeError(
+			`these levels allow ${expected} transitions of the chosen types; the matcher handles at most ${MAX_MATCH_TRANSITIONS} — use fewer levels or types`
+		);
 	}
 	const n = levels.length;
 	const energy = Float64Array.from(levels, (l) => l.energy);
@@ -312,7 +316,7 @@ function prepareLines(lines: readonly ObservedLine[], tolerance: Tolerance): Pre
 		try {
 			vacuumA = toVacuumAngstrom(line.wavelength, line.unit, line.medium);
 		} catch (e) {
-			throw new RangeError(`line ${i}: ${(e as Error).message}`);
+			throw new RangeError(`line ${i}: ${(e as Error).message}`, { cause: e });
 		}
 		const sigma = ANGSTROM_PER_CM / vacuumA;
 		let u = 0;
@@ -320,7 +324,7 @@ function prepareLines(lines: readonly ObservedLine[], tolerance: Tolerance): Pre
 			try {
 				u = uncertaintyToWavenumber(line.uncertainty, line.unit, vacuumA);
 			} catch (e) {
-				throw new RangeError(`line ${i}: ${(e as Error).message}`);
+				throw new RangeError(`line ${i}: ${(e as Error).message}`, { cause: e });
 			}
 		}
 		let fixed: number | null = null;
@@ -333,7 +337,8 @@ function prepareLines(lines: readonly ObservedLine[], tolerance: Tolerance): Pre
 function checkTolerance(tolerance: Tolerance): number {
 	if (tolerance.kind === 'combined') {
 		const f = tolerance.factor ?? DEFAULT_COVERAGE_FACTOR;
-		if (!Number.isFinite(f) || f <= 0 || f > 10) throw new RangeError(`the coverage factor must be a number above 0 and at most 10, got ${f}`);
+		if (!Number.isFinite(f) || f <= 0 || f > 10)
+			throw new RangeError(`the coverage factor must be a number above 0 and at most 10, got ${f}`);
 		return f;
 	}
 	if (tolerance.kind === 'cm-1' || tolerance.kind === 'mA') {
@@ -347,7 +352,8 @@ function checkTolerance(tolerance: Tolerance): number {
 
 function checkMaxCandidates(m: number | undefined): number {
 	const v = m ?? DEFAULT_MAX_CANDIDATES;
-	if (!Number.isInteger(v) || v < 1 || v > MAX_CANDIDATES_LIMIT) throw new RangeError(`maxCandidates must be an integer from 1 to ${MAX_CANDIDATES_LIMIT}, got ${m}`);
+	if (!Number.isInteger(v) || v < 1 || v > MAX_CANDIDATES_LIMIT)
+		throw new RangeError(`maxCandidates must be an integer from 1 to ${MAX_CANDIDATES_LIMIT}, got ${m}`);
 	return v;
 }
 
@@ -367,7 +373,10 @@ function describePair(
 	const same = a.term.twoS === b.term.twoS && a.term.L === b.term.L && a.parity === b.parity && (a.group ?? '') === (b.group ?? '');
 	const small = a.term.twoS < 32 && b.term.twoS < 32 && a.term.L < 64 && b.term.L < 64 && a.twoJ < 128 && b.twoJ < 128;
 	const key = small
-		? ((((((TYPE_CODE[type] * 2 + (same ? 1 : 0)) * 32 + a.term.twoS) * 64 + a.term.L) * 128 + a.twoJ) * 32 + b.term.twoS) * 64 + b.term.L) * 128 + b.twoJ
+		? ((((((TYPE_CODE[type] * 2 + (same ? 1 : 0)) * 32 + a.term.twoS) * 64 + a.term.L) * 128 + a.twoJ) * 32 + b.term.twoS) * 64 +
+				b.term.L) *
+				128 +
+			b.twoJ
 		: -1;
 	const hit = key >= 0 ? cache.get(key) : undefined;
 	if (hit) return hit;
@@ -378,7 +387,9 @@ function describePair(
 }
 
 function rank(candidates: Candidate[], max: number): Candidate[] {
-	candidates.sort((p, q) => Math.abs(p.residual) - Math.abs(q.residual) || p.lower - q.lower || p.upper - q.upper || TYPE_CODE[p.type] - TYPE_CODE[q.type]);
+	candidates.sort(
+		(p, q) => Math.abs(p.residual) - Math.abs(q.residual) || p.lower - q.lower || p.upper - q.upper || TYPE_CODE[p.type] - TYPE_CODE[q.type]
+	);
 	return candidates.length > max ? candidates.slice(0, max) : candidates;
 }
 
@@ -434,7 +445,14 @@ export function matchLines(levels: readonly MatchLevel[], lines: readonly Observ
 			if (!strength || strength.ofStrongest < STRONG_LINE_RATIO) continue;
 			unobservedCount++;
 			if (unobserved.length < MAX_REPORTED_PREDICTIONS) {
-				unobserved.push({ lower: table.lower[k], upper: table.upper[k], type, wavenumber: table.sigma[k], vacuumA: ANGSTROM_PER_CM / table.sigma[k], strength });
+				unobserved.push({
+					lower: table.lower[k],
+					upper: table.upper[k],
+					type,
+					wavenumber: table.sigma[k],
+					vacuumA: ANGSTROM_PER_CM / table.sigma[k],
+					strength
+				});
 			}
 		}
 	}
@@ -446,7 +464,11 @@ export function matchLines(levels: readonly MatchLevel[], lines: readonly Observ
  * the rules and the tolerance. Same candidates (all of them, unranked beyond |residual|) as `matchLines`;
  * O(lines × levels²). Throws like `matchLines`.
  */
-export function matchLinesBruteForce(levels: readonly MatchLevel[], lines: readonly ObservedLine[], options: MatchOptions = {}): Candidate[][] {
+export function matchLinesBruteForce(
+	levels: readonly MatchLevel[],
+	lines: readonly ObservedLine[],
+	options: MatchOptions = {}
+): Candidate[][] {
 	const types = checkTransitionTypes(options.types ?? TRANSITION_TYPES);
 	const tolerance = options.tolerance ?? { kind: 'combined' };
 	const factor = checkTolerance(tolerance);

@@ -29,7 +29,8 @@ export interface RitzLine {
  */
 export function ritzUncertainty(lower: number | null | undefined, upper: number | null | undefined): number | null {
 	for (const u of [lower, upper]) {
-		if (u !== null && u !== undefined && (!Number.isFinite(u) || u < 0)) throw new RangeError(`a level uncertainty must be a number ≥ 0 (cm⁻¹), got ${u}`);
+		if (u !== null && u !== undefined && (!Number.isFinite(u) || u < 0))
+			throw new RangeError(`a level uncertainty must be a number ≥ 0 (cm⁻¹), got ${u}`);
 	}
 	if ((lower ?? null) === null && (upper ?? null) === null) return null;
 	return Math.hypot(lower ?? 0, upper ?? 0);
@@ -40,7 +41,12 @@ export function ritzUncertainty(lower: number | null | undefined, upper: number 
  * Throws RangeError when an energy is not finite or when E_upper ≤ E_lower (no emission line).
  * @example ritzLine(82259.16, 97492.3).airA // ≈ 6562.8 Å (Balmer Hα)
  */
-export function ritzLine(lowerEnergy: number, upperEnergy: number, lowerUncertainty?: number | null, upperUncertainty?: number | null): RitzLine {
+export function ritzLine(
+	lowerEnergy: number,
+	upperEnergy: number,
+	lowerUncertainty?: number | null,
+	upperUncertainty?: number | null
+): RitzLine {
 	if (!Number.isFinite(lowerEnergy) || !Number.isFinite(upperEnergy)) {
 		throw new RangeError(`level energies must be finite numbers of cm⁻¹, got ${lowerEnergy} and ${upperEnergy}`);
 	}

@@ -48,16 +48,26 @@ describe('selection rules on J and parity (Condon & Shortley 1935 ch. IV; Cowan 
 	});
 	it('the rules are symmetric in the two levels (property)', () => {
 		fc.assert(
-			fc.property(fc.integer({ min: 0, max: 12 }), fc.integer({ min: 0, max: 12 }), fc.constantFrom('E1', 'M1', 'E2' as const), (a, b, type) => {
-				return jParityAllows(type, a, 'even', b, 'odd') === jParityAllows(type, b, 'odd', a, 'even');
-			})
+			fc.property(
+				fc.integer({ min: 0, max: 12 }),
+				fc.integer({ min: 0, max: 12 }),
+				fc.constantFrom('E1', 'M1', 'E2' as const),
+				(a, b, type) => {
+					return jParityAllows(type, a, 'even', b, 'odd') === jParityAllows(type, b, 'odd', a, 'even');
+				}
+			)
 		);
 	});
 });
 
 describe('LS rules: ΔS = 0, ΔL = 0, ±1 (not 0–0) for E1; intercombination lines flagged', () => {
 	it('³P–³D° is LS-allowed, ³P–¹P° is an intercombination line, ²S–²S° and ²S–²D° break the L rule', () => {
-		expect(lsVerdict('E1', T(1, 1), T(1, 2), false)).toEqual({ spinConserved: true, orbitalAllowed: true, allowed: true, intercombination: false });
+		expect(lsVerdict('E1', T(1, 1), T(1, 2), false)).toEqual({
+			spinConserved: true,
+			orbitalAllowed: true,
+			allowed: true,
+			intercombination: false
+		});
 		expect(lsVerdict('E1', T(1, 1), T(0, 1), false)).toMatchObject({ allowed: false, intercombination: true });
 		expect(lsVerdict('E1', T(0.5, 0), T(0.5, 0), false)).toMatchObject({ allowed: false, orbitalAllowed: false });
 		expect(lsVerdict('E1', T(0.5, 0), T(0.5, 2), false)).toMatchObject({ allowed: false, orbitalAllowed: false });
@@ -94,7 +104,7 @@ describe('relative line strengths in LS multiplets, S ∝ (2J+1)(2J′+1){L J S;
 	it('³S–³P°: J′ = 2, 1, 0 as 5 : 3 : 1 (Condon & Shortley 1935 ch. IX; the upper-level weights 2J′+1)', () => {
 		expect(table('E1', T(1, 0), T(1, 1))).toEqual({ '1–2': '5', '1–1': '3', '1–0': '1' });
 	});
-	it('³P–³D°: 84 : 45 : 20 : 15 : 15 : 1 (the classic multiplet table, e.g. Allen\'s Astrophysical Quantities; from memory)', () => {
+	it("³P–³D°: 84 : 45 : 20 : 15 : 15 : 1 (the classic multiplet table, e.g. Allen's Astrophysical Quantities; from memory)", () => {
 		// Total (2S+1)(2L+1)(2L′+1) = 45 = 180/4, so every printed number appears divided by 4.
 		const t = table('E1', T(1, 1), T(1, 2));
 		const scaled = Object.fromEntries(Object.entries(t).map(([k, v]) => [k, new Fraction(v).mul(4).toFraction()]));
@@ -171,8 +181,15 @@ describe('transitionsBetween', () => {
 		fc.assert(
 			fc.property(fc.array(levelArb, { maxLength: 8 }), fc.array(levelArb, { maxLength: 8 }), (a, b) => {
 				const list = transitionsBetween(a, b);
-				const count = a.flatMap((x) => b.map((y) => ['E1', 'M1', 'E2'].filter((t) => jParityAllows(t as 'E1', x.twoJ, x.parity, y.twoJ, y.parity)).length)).reduce((s, n) => s + n, 0);
-				return list.length === count && list.every((t) => jParityAllows(t.type, a[t.lower].twoJ, a[t.lower].parity, b[t.upper].twoJ, b[t.upper].parity));
+				const count = a
+					.flatMap((x) =>
+						b.map((y) => ['E1', 'M1', 'E2'].filter((t) => jParityAllows(t as 'E1', x.twoJ, x.parity, y.twoJ, y.parity)).length)
+					)
+					.reduce((s, n) => s + n, 0);
+				return (
+					list.length === count &&
+					list.every((t) => jParityAllows(t.type, a[t.lower].twoJ, a[t.lower].parity, b[t.upper].twoJ, b[t.upper].parity))
+				);
 			})
 		);
 	});

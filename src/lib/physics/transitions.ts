@@ -193,7 +193,13 @@ export function multipletLines(type: TransitionType, lower: LsTerm, upper: LsTer
 			return {
 				twoJLower: r.twoJLower,
 				twoJUpper: r.twoJUpper,
-				strength: { exact: r.s.toFraction(), value: r.s.valueOf(), share: share.toFraction(), shareValue: share.valueOf(), ofStrongest: r.s.valueOf() / strongest }
+				strength: {
+					exact: r.s.toFraction(),
+					value: r.s.valueOf(),
+					share: share.toFraction(),
+					shareValue: share.valueOf(),
+					ofStrongest: r.s.valueOf() / strongest
+				}
 			};
 		});
 	}
@@ -202,7 +208,13 @@ export function multipletLines(type: TransitionType, lower: LsTerm, upper: LsTer
 }
 
 /** The theoretical strength of one line, or null when the multiplet has none (see `multipletLines`). */
-export function lineStrengthOf(type: TransitionType, lower: LsTerm, twoJLower: number, upper: LsTerm, twoJUpper: number): LineStrength | null {
+export function lineStrengthOf(
+	type: TransitionType,
+	lower: LsTerm,
+	twoJLower: number,
+	upper: LsTerm,
+	twoJUpper: number
+): LineStrength | null {
 	const lines = multipletLines(type, lower, upper);
 	return lines?.find((l) => l.twoJLower === twoJLower && l.twoJUpper === twoJUpper)?.strength ?? null;
 }
@@ -240,12 +252,21 @@ export function checkTransitionTypes(types: readonly string[]): TransitionType[]
 }
 
 function checkLevel(where: string, level: SpectralLevel, i: number): void {
-	if (!Number.isInteger(level.twoJ) || level.twoJ < 0) throw new RangeError(`${where} level ${i}: 2J must be a non-negative integer, got ${level.twoJ}`);
-	if (level.parity !== 'even' && level.parity !== 'odd') throw new RangeError(`${where} level ${i}: parity must be "even" or "odd", got "${String(level.parity)}"`);
+	if (!Number.isInteger(level.twoJ) || level.twoJ < 0)
+		throw new RangeError(`${where} level ${i}: 2J must be a non-negative integer, got ${level.twoJ}`);
+	if (level.parity !== 'even' && level.parity !== 'odd')
+		throw new RangeError(`${where} level ${i}: parity must be "even" or "odd", got "${String(level.parity)}"`);
 }
 
 function sameTermOccurrence(a: SpectralLevel, b: SpectralLevel): boolean {
-	return !!a.term && !!b.term && a.term.twoS === b.term.twoS && a.term.L === b.term.L && a.parity === b.parity && (a.group ?? '') === (b.group ?? '');
+	return (
+		!!a.term &&
+		!!b.term &&
+		a.term.twoS === b.term.twoS &&
+		a.term.L === b.term.L &&
+		a.parity === b.parity &&
+		(a.group ?? '') === (b.group ?? '')
+	);
 }
 
 /**
@@ -258,14 +279,23 @@ function sameTermOccurrence(a: SpectralLevel, b: SpectralLevel): boolean {
  * exceed MAX_TRANSITION_PAIRS (checked before any work), for a bad level (2J, parity) or an unknown type.
  * @example transitionsBetween([{ twoJ: 1, parity: 'even' }], [{ twoJ: 3, parity: 'odd' }], { types: ['E1'] }).length // 1
  */
-export function transitionsBetween(lower: readonly SpectralLevel[], upper: readonly SpectralLevel[], options: TransitionOptions = {}): Transition[] {
+export function transitionsBetween(
+	lower: readonly SpectralLevel[],
+	upper: readonly SpectralLevel[],
+	options: TransitionOptions = {}
+): Transition[] {
 	const types = checkTransitionTypes(options.types ?? TRANSITION_TYPES);
 	const within = options.within === true;
-	for (const [name, list] of [['lower', lower], ['upper', upper]] as const) {
-		if (list.length > MAX_TRANSITION_LEVELS) throw new RangeError(`the ${name} list has ${list.length} levels; at most ${MAX_TRANSITION_LEVELS} are allowed`);
+	for (const [name, list] of [
+		['lower', lower],
+		['upper', upper]
+	] as const) {
+		if (list.length > MAX_TRANSITION_LEVELS)
+			throw new RangeError(`the ${name} list has ${list.length} levels; at most ${MAX_TRANSITION_LEVELS} are allowed`);
 	}
 	const pairs = within ? (lower.length * (lower.length - 1)) / 2 : lower.length * upper.length;
-	if (pairs > MAX_TRANSITION_PAIRS) throw new RangeError(`${pairs} level pairs to examine; at most ${MAX_TRANSITION_PAIRS} are allowed — choose smaller level lists`);
+	if (pairs > MAX_TRANSITION_PAIRS)
+		throw new RangeError(`${pairs} level pairs to examine; at most ${MAX_TRANSITION_PAIRS} are allowed — choose smaller level lists`);
 	lower.forEach((l, i) => checkLevel('lower', l, i));
 	if (!within) upper.forEach((l, i) => checkLevel('upper', l, i));
 
@@ -300,6 +330,7 @@ export function transitionsBetween(lower: readonly SpectralLevel[], upper: reado
 
 /** "³P₂–³D°₃" style text of a transition's levels, for messages and tables (J as fractions). */
 export function transitionText(a: SpectralLevel, b: SpectralLevel): string {
-	const side = (l: SpectralLevel) => (l.term ? termSymbol(l.term, l.parity) : l.parity === 'odd' ? '(odd)' : '(even)') + ` J=${halfString(l.twoJ)}`;
+	const side = (l: SpectralLevel) =>
+		(l.term ? termSymbol(l.term, l.parity) : l.parity === 'odd' ? '(odd)' : '(even)') + ` J=${halfString(l.twoJ)}`;
 	return `${side(a)} – ${side(b)}`;
 }
