@@ -21,7 +21,7 @@ const T = (S: number, L: number): LsTerm => ({ twoS: d(S), L });
  * An invented level list (no real ion): an even ³P ground term, an even ¹D, an odd ³D° and ³P°, energies
  * in cm⁻¹ chosen by hand with uncertainties of 0.02 cm⁻¹.
  */
-const LEVELS: MatchLevel[] = [
+const INVENTED: Omit<MatchLevel, 'uncertainty'>[] = [
 	{ twoJ: d(0), parity: 'even', term: T(1, 1), energy: 0 },
 	{ twoJ: d(1), parity: 'even', term: T(1, 1), energy: 140.25 },
 	{ twoJ: d(2), parity: 'even', term: T(1, 1), energy: 401.6 },
@@ -32,7 +32,8 @@ const LEVELS: MatchLevel[] = [
 	{ twoJ: d(0), parity: 'odd', term: T(1, 1), energy: 35002.3 },
 	{ twoJ: d(1), parity: 'odd', term: T(1, 1), energy: 35051.85 },
 	{ twoJ: d(2), parity: 'odd', term: T(1, 1), energy: 35160.45 }
-].map((l) => ({ ...l, uncertainty: 0.02 }));
+];
+const LEVELS: MatchLevel[] = INVENTED.map((l) => ({ ...l, uncertainty: 0.02 }));
 
 /** The line a spectrograph would record for σ: air wavelength from 2000 Å, vacuum below (Morton 2000 convention). */
 function lineFor(sigma: number, uncertaintyCm = 0.01): ObservedLine {
