@@ -27,6 +27,7 @@ export { termDisplay, levelDisplay } from './display';
 export { parentageOf, onTypedParents, MAX_PARENTAGE_OCCURRENCES, type ParentagePath } from './parentage';
 export { listMicrostates, iterateMicrostates } from './listing';
 export { termsByEnumeration } from './enumerate';
+export { jkLevels, jkSplit, jkLevelCountsByJ, JkNotApplicable, MAX_JK_LEVELS, type JkLevel } from './jk';
 export { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from './jj';
 export {
 	wigner3j,
