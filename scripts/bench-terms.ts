@@ -104,7 +104,17 @@ export function main(): BenchRow[] {
 	const rows: BenchRow[] = [];
 	console.log('LS terms: generating-function counting (termsOf) vs enumeration and peeling (termsByEnumeration)');
 	console.log(`Node ${process.version}; medians after warm-up; "cold" clears the per-subshell cache before each run.\n`);
-	const header = ['configuration', 'microstates', 'open', 'distinct terms', 'count cold ms', 'count warm ms', 'enumerate ms', 'ratio', 'heap MB'];
+	const header = [
+		'configuration',
+		'microstates',
+		'open',
+		'distinct terms',
+		'count cold ms',
+		'count warm ms',
+		'enumerate ms',
+		'ratio',
+		'heap MB'
+	];
 	console.log(header.join(' | '));
 	for (const text of CONFIGURATIONS) {
 		const row = benchOne(text);
@@ -141,7 +151,9 @@ export function main(): BenchRow[] {
 		);
 	}
 	const mem = process.memoryUsage();
-	console.log(`Heap used at the end: ${(mem.heapUsed / 2 ** 20).toFixed(1)} MB (total heap ${(mem.heapTotal / 2 ** 20).toFixed(1)} MB, RSS ${(mem.rss / 2 ** 20).toFixed(1)} MB)`);
+	console.log(
+		`Heap used at the end: ${(mem.heapUsed / 2 ** 20).toFixed(1)} MB (total heap ${(mem.heapTotal / 2 ** 20).toFixed(1)} MB, RSS ${(mem.rss / 2 ** 20).toFixed(1)} MB)`
+	);
 	return rows;
 }
 

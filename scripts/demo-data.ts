@@ -24,7 +24,8 @@ export const demoShelf = [
 		species: 'O III',
 		notation: '1s2 2s2 2p2',
 		tags: ['nebula', 'forbidden lines'],
-		notes: 'Forbidden lines inside the ground configuration dominate the nebula’s spectrum. Level energies entered here are invented for the demo.'
+		notes:
+			'Forbidden lines inside the ground configuration dominate the nebula’s spectrum. Level energies entered here are invented for the demo.'
 	},
 	{
 		title: 'Singly ionized nitrogen, auroral and nebular lines',
@@ -60,13 +61,61 @@ export const demoShelf = [
  * Invented level notes, by Shelf entry index. The energies are made up for the fictional
  * objects and deliberately do not reproduce any catalogue.
  */
-export const demoNotes: { entry: number; by: number; levelKey: string; observedEnergy: number | null; uncertainty: number | null; status: 'proposed' | 'confirmed' | 'disputed'; comment: string }[] = [
+export const demoNotes: {
+	entry: number;
+	by: number;
+	levelKey: string;
+	observedEnergy: number | null;
+	uncertainty: number | null;
+	status: 'proposed' | 'confirmed' | 'disputed';
+	comment: string;
+}[] = [
 	{ entry: 0, by: 0, levelKey: '3P#1|0', observedEnergy: 0, uncertainty: 0, status: 'confirmed', comment: 'Ground level by definition.' },
-	{ entry: 0, by: 1, levelKey: '3P#1|1', observedEnergy: 117.42, uncertainty: 0.05, status: 'confirmed', comment: 'From the far-infrared pair in the KRO-PN 7 spectrum.' },
+	{
+		entry: 0,
+		by: 1,
+		levelKey: '3P#1|1',
+		observedEnergy: 117.42,
+		uncertainty: 0.05,
+		status: 'confirmed',
+		comment: 'From the far-infrared pair in the KRO-PN 7 spectrum.'
+	},
 	{ entry: 0, by: 1, levelKey: '3P#1|2', observedEnergy: 305.9, uncertainty: 0.08, status: 'confirmed', comment: '' },
-	{ entry: 0, by: 1, levelKey: '1D#1|2', observedEnergy: 20190.3, uncertainty: 0.4, status: 'proposed', comment: 'Nebular doublet; second member blended with a sky line.' },
-	{ entry: 0, by: 0, levelKey: '1S#1|0', observedEnergy: 43150.8, uncertainty: 1.5, status: 'disputed', comment: 'Auroral line is weak; Imre is not convinced by the identification.' },
-	{ entry: 2, by: 1, levelKey: '6D#1|9/2', observedEnergy: 0, uncertainty: 0, status: 'confirmed', comment: 'Hund ground level; adopted as zero.' },
+	{
+		entry: 0,
+		by: 1,
+		levelKey: '1D#1|2',
+		observedEnergy: 20190.3,
+		uncertainty: 0.4,
+		status: 'proposed',
+		comment: 'Nebular doublet; second member blended with a sky line.'
+	},
+	{
+		entry: 0,
+		by: 0,
+		levelKey: '1S#1|0',
+		observedEnergy: 43150.8,
+		uncertainty: 1.5,
+		status: 'disputed',
+		comment: 'Auroral line is weak; Imre is not convinced by the identification.'
+	},
+	{
+		entry: 2,
+		by: 1,
+		levelKey: '6D#1|9/2',
+		observedEnergy: 0,
+		uncertainty: 0,
+		status: 'confirmed',
+		comment: 'Hund ground level; adopted as zero.'
+	},
 	{ entry: 2, by: 1, levelKey: '6D#1|7/2', observedEnergy: 391.2, uncertainty: 0.3, status: 'proposed', comment: '' },
-	{ entry: 3, by: 1, levelKey: '5I#1|4', observedEnergy: 0, uncertainty: null, status: 'disputed', comment: 'Assumed ground level; needs observed levels.' }
+	{
+		entry: 3,
+		by: 1,
+		levelKey: '5I#1|4',
+		observedEnergy: 0,
+		uncertainty: null,
+		status: 'disputed',
+		comment: 'Assumed ground level; needs observed levels.'
+	}
 ];

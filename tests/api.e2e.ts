@@ -88,7 +88,10 @@ test('project routes: 401 without sign-in, 400 for a body that is not JSON, toke
 
 	const { newUser } = await import('./helpers');
 	const { context, page } = await newUser(browser, 'Api User', 'api');
-	const notJson = await page.request.post('/api/v1/projects', { headers: { 'content-type': 'application/json' }, data: Buffer.from('{name:') });
+	const notJson = await page.request.post('/api/v1/projects', {
+		headers: { 'content-type': 'application/json' },
+		data: Buffer.from('{name:')
+	});
 	expect(notJson.status()).toBe(400);
 	expect((await notJson.json()).error.message).toBe('Request body must be JSON');
 	const notObject = await page.request.post('/api/v1/projects', { data: '"a string"' });
@@ -101,7 +104,10 @@ test('project routes: 401 without sign-in, 400 for a body that is not JSON, toke
 	await page.getByLabel('Name').fill('script');
 	await page.getByRole('button', { name: 'Create token' }).click();
 	const token = (await page.getByTestId('new-token').textContent())!.trim();
-	const viaToken = await request.post('/api/v1/projects', { headers: { authorization: `Bearer ${token}` }, data: { name: 'Made by a script' } });
+	const viaToken = await request.post('/api/v1/projects', {
+		headers: { authorization: `Bearer ${token}` },
+		data: { name: 'Made by a script' }
+	});
 	expect(viaToken.status()).toBe(201);
 	const bad = await request.get('/api/v1/projects', { headers: { authorization: 'Bearer tw_wrong' } });
 	expect(bad.status()).toBe(401);

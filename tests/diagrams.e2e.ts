@@ -126,7 +126,10 @@ test.describe('Builder pictures', () => {
 		// Hover on ¹S₀ highlights its link (J = 0, to the upper J = 0 jj level, (3/2)² (0)₀).
 		await panel.getByTestId('bridge-ls-level').nth(4).hover();
 		await expect(panel.locator('[data-testid="bridge-link"][data-active="true"]')).toHaveCount(1);
-		await expect(panel.locator('[data-testid="bridge-link"][data-active="true"]')).toHaveAttribute('aria-label', /^J = 0: 1S0 — 2p3\/2\^2 \(0\)_0$/);
+		await expect(panel.locator('[data-testid="bridge-link"][data-active="true"]')).toHaveAttribute(
+			'aria-label',
+			/^J = 0: 1S0 — 2p3\/2\^2 \(0\)_0$/
+		);
 		// Keyboard: focusing a row of the link table highlights the same link.
 		await page.mouse.move(0, 0);
 		await panel.getByRole('button', { name: '3P1 joins 2p1/2 2p3/2 (1/2, 3/2)_1, J = 1' }).focus();

@@ -91,7 +91,13 @@ export function toLatex<R>(rows: readonly R[], allColumns: readonly Column<R>[],
 	].join('\n');
 }
 
-export function render<R>(format: ExportFormat, rows: readonly R[], columns: readonly Column<R>[], caption: string, meta: Record<string, unknown> = {}): string {
+export function render<R>(
+	format: ExportFormat,
+	rows: readonly R[],
+	columns: readonly Column<R>[],
+	caption: string,
+	meta: Record<string, unknown> = {}
+): string {
 	if (format === 'csv') return toCsv(rows, columns);
 	if (format === 'json') return toJson(rows, columns, meta);
 	return toLatex(rows, columns, caption);

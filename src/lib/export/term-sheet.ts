@@ -43,7 +43,12 @@ export function levelRows(sheet: TermSheet): LevelRow[] {
 const odd = (r: LevelRow) => r.parity === 'odd';
 
 export const levelColumns: Column<LevelRow>[] = [
-	{ key: 'term', latex: 'Term', value: (r) => r.term + (odd(r) ? 'o' : ''), latexValue: (r) => latexTerm(r.multiplicity, r.letter, null, odd(r)) },
+	{
+		key: 'term',
+		latex: 'Term',
+		value: (r) => r.term + (odd(r) ? 'o' : ''),
+		latexValue: (r) => latexTerm(r.multiplicity, r.letter, null, odd(r))
+	},
 	{ key: 'count', latex: 'Count', align: 'r', value: (r) => r.count },
 	{ key: 'seniority', latex: '$v$', align: 'r', value: (r) => r.seniority },
 	{ key: 'S', latex: '$S$', align: 'r', value: (r) => r.S },

@@ -194,7 +194,11 @@ describe('ground configurations of positive ions', () => {
 
 	it('V II 3d4, Co II 3d8, Ni II 3d9 differ from the removal rule and come from the table without caution', () => {
 		// NIST ASD ground levels, from memory: V II a⁵D₀ 3d⁴, Co II a³F₄ 3d⁸, Ni II ²D₅/₂ 3d⁹.
-		for (const [s, n] of [['V II', '[Ar] 3d4'], ['Co II', '[Ar] 3d8'], ['Ni II', '[Ar] 3d9']]) {
+		for (const [s, n] of [
+			['V II', '[Ar] 3d4'],
+			['Co II', '[Ar] 3d8'],
+			['Ni II', '[Ar] 3d9']
+		]) {
 			const g = groundConfiguration(s);
 			expect(g.notation).toBe(n);
 			expect(g.caution).toBeNull();

@@ -10,7 +10,15 @@
  * ions whose observed ground configuration differs from that rule overrides it.
  */
 import type { Configuration, Subshell } from './types';
-import { NOBLE_GAS_CORES, configurationOf, largestCore, parseConfiguration, formatConfiguration, subshellCapacity, bySubshellOrder } from './parse';
+import {
+	NOBLE_GAS_CORES,
+	configurationOf,
+	largestCore,
+	parseConfiguration,
+	formatConfiguration,
+	subshellCapacity,
+	bySubshellOrder
+} from './parse';
 
 /** Chemical symbols for Z = 1 … 118 (IUPAC). `ELEMENT_SYMBOLS[Z - 1]`. */
 export const ELEMENT_SYMBOLS: readonly string[] = Object.freeze(
@@ -119,7 +127,8 @@ export const ION_CAUTION =
 const SUPERHEAVY_CAUTION =
 	'Beyond Z = 103 the ground configuration is given by the Madelung (n + l, then n) order only; it is predicted, not measured, and relativistic effects may change it.';
 
-const LR_CAUTION = 'The 7p ground configuration of Lr is tentative in the reference tables (predicted and supported by ionization-energy measurements).';
+const LR_CAUTION =
+	'The 7p ground configuration of Lr is tentative in the reference tables (predicted and supported by ionization-energy measurements).';
 
 const ROMAN = /^M{0,3}(CM|CD|D?C{0,3})(XC|XL|L?X{0,3})(IX|IV|V?I{0,3})$/;
 const ROMAN_VALUES: Record<string, number> = { I: 1, V: 5, X: 10, L: 50, C: 100, D: 500, M: 1000 };
@@ -146,11 +155,26 @@ export function romanValue(text: string): number | null {
 export function toRoman(n: number): string {
 	if (!Number.isInteger(n) || n < 1 || n > 3999) throw new RangeError(`toRoman: n must be an integer from 1 to 3999, got ${n}`);
 	const table: [number, string][] = [
-		[1000, 'M'], [900, 'CM'], [500, 'D'], [400, 'CD'], [100, 'C'], [90, 'XC'],
-		[50, 'L'], [40, 'XL'], [10, 'X'], [9, 'IX'], [5, 'V'], [4, 'IV'], [1, 'I']
+		[1000, 'M'],
+		[900, 'CM'],
+		[500, 'D'],
+		[400, 'CD'],
+		[100, 'C'],
+		[90, 'XC'],
+		[50, 'L'],
+		[40, 'XL'],
+		[10, 'X'],
+		[9, 'IX'],
+		[5, 'V'],
+		[4, 'IV'],
+		[1, 'I']
 	];
 	let out = '';
-	for (const [v, s] of table) while (n >= v) { out += s; n -= v; }
+	for (const [v, s] of table)
+		while (n >= v) {
+			out += s;
+			n -= v;
+		}
 	return out;
 }
 
@@ -181,7 +205,9 @@ function findElementLoose(word: string): number | null {
 	const w = word.toLowerCase();
 	const bySymbol = ELEMENT_SYMBOLS.findIndex((s) => s.toLowerCase() === w);
 	if (bySymbol >= 0) return bySymbol + 1;
-	const byName = ELEMENT_NAMES.findIndex((s) => s.toLowerCase() === w || (w === 'aluminum' && s === 'Aluminium') || (w === 'cesium' && s === 'Caesium'));
+	const byName = ELEMENT_NAMES.findIndex(
+		(s) => s.toLowerCase() === w || (w === 'aluminum' && s === 'Aluminium') || (w === 'cesium' && s === 'Caesium')
+	);
 	return byName >= 0 ? byName + 1 : null;
 }
 
@@ -193,7 +219,10 @@ function chargeOf(rest: string, symbol: string): number {
 	if (/^[IVXLCDM]+$/.test(r)) {
 		const v = romanValue(r);
 		if (v === null) {
-			throw new SpeciesError(`"${r}" is not a valid Roman numeral: write the spectrum number as I, II, III, IV, … (${symbol} II is ${symbol}+)`, r);
+			throw new SpeciesError(
+				`"${r}" is not a valid Roman numeral: write the spectrum number as I, II, III, IV, … (${symbol} II is ${symbol}+)`,
+				r
+			);
 		}
 		return v - 1;
 	}
@@ -205,7 +234,8 @@ function chargeOf(rest: string, symbol: string): number {
 		const digits = m[1] === '+' || m[1] === '-' ? m[2] : m[1];
 		const sign = m[1] === '+' || m[1] === '-' ? m[1] : m[2];
 		const size = digits === '' ? 1 : Number(digits);
-		if (sign === '-' && size > 0) throw new SpeciesError(`negative ions are not supported ("${r}"): give a neutral atom or a positive ion`, r);
+		if (sign === '-' && size > 0)
+			throw new SpeciesError(`negative ions are not supported ("${r}"): give a neutral atom or a positive ion`, r);
 		return size;
 	}
 	if (/^\++$/.test(r)) return r.length;
@@ -213,7 +243,14 @@ function chargeOf(rest: string, symbol: string): number {
 	m = /^\^?\{?([⁰¹²³⁴⁵⁶⁷⁸⁹]*)([⁺⁻])\}?$/.exec(r);
 	if (m) {
 		if (m[2] === '⁻') throw new SpeciesError(`negative ions are not supported ("${r}"): give a neutral atom or a positive ion`, r);
-		return m[1] === '' ? 1 : Number(m[1].split('').map((c) => SUPERSCRIPT.indexOf(c)).join(''));
+		return m[1] === ''
+			? 1
+			: Number(
+					m[1]
+						.split('')
+						.map((c) => SUPERSCRIPT.indexOf(c))
+						.join('')
+				);
 	}
 	throw new SpeciesError(
 		`cannot read the charge "${r}": write a spectrum number (${symbol} II) or a charge (${symbol}+, ${symbol} 2+, ${symbol}3+)`,
@@ -230,7 +267,8 @@ function chargeOf(rest: string, symbol: string): number {
  */
 export function parseSpecies(text: string): Species {
 	const t = String(text ?? '').trim();
-	if (t === '') throw new SpeciesError('the species is empty: write an element and a spectrum number or charge, e.g. "Fe II" or "Nd3+"', '');
+	if (t === '')
+		throw new SpeciesError('the species is empty: write an element and a spectrum number or charge, e.g. "Fe II" or "Nd3+"', '');
 	if (t.length > 40) throw new SpeciesError(`the species "${t.slice(0, 20)}…" is too long: at most 40 characters`, t.slice(0, 20));
 	const m = /^(\p{L}+)(.*)$/u.exec(t);
 	if (!m) throw new SpeciesError(`"${t}" does not start with an element symbol such as Fe or Nd`, t);
@@ -375,8 +413,10 @@ export function groundConfiguration(input: Species | string): GroundConfiguratio
 function checkSpecies(s: Species): Species {
 	const el = elementByZ(s.Z);
 	if (!Number.isInteger(s.charge) || s.charge < 0 || s.charge >= s.Z) {
-		throw new SpeciesError(`charge ${s.charge} is not allowed for ${el.symbol}: it must be an integer from 0 to ${s.Z - 1}`, String(s.charge));
+		throw new SpeciesError(
+			`charge ${s.charge} is not allowed for ${el.symbol}: it must be an integer from 0 to ${s.Z - 1}`,
+			String(s.charge)
+		);
 	}
 	return { Z: s.Z, symbol: el.symbol, name: el.name, charge: s.charge };
 }
-

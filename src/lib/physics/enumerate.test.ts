@@ -26,7 +26,11 @@ describe('terms by enumeration and peeling', () => {
 	it('counting (termsOf) and enumeration agree on random configurations up to 10^5 microstates', () => {
 		const subshellArb = fc
 			.integer({ min: 1, max: 8 })
-			.chain((n) => fc.integer({ min: 0, max: Math.min(n - 1, 4) }).chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy }))));
+			.chain((n) =>
+				fc
+					.integer({ min: 0, max: Math.min(n - 1, 4) })
+					.chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy })))
+			);
 		const configArb = fc
 			.uniqueArray(subshellArb, { minLength: 1, maxLength: 4, selector: (s) => `${s.n},${s.l}` })
 			.filter((s) => microstateTotal(s) <= PROPERTY_MAX_MICROSTATES);

@@ -44,7 +44,9 @@ export function termsByEnumeration(input: Configuration | readonly Subshell[]): 
 	const subshells = asSubshells(input);
 	const total = microstateTotal(subshells);
 	if (total > BigInt(ENUMERATION_LIMIT)) {
-		throw new RangeError(`the configuration has ${total} microstates; enumeration is limited to ${ENUMERATION_LIMIT} (use termsOf instead)`);
+		throw new RangeError(
+			`the configuration has ${total} microstates; enumeration is limited to ${ENUMERATION_LIMIT} (use termsOf instead)`
+		);
 	}
 	const open = openSubshells(subshells);
 	let maxML = 0;

@@ -1,13 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-	MAX_JJ_LEVELS,
-	assertLsJjAgree,
-	jGroupJCounts,
-	jGroupSeniorities,
-	jjLevelCountsByJ,
-	jjLevels
-} from './jj';
+import { MAX_JJ_LEVELS, assertLsJjAgree, jGroupJCounts, jGroupSeniorities, jjLevelCountsByJ, jjLevels } from './jj';
 import { ConfigurationError, parseConfiguration } from './parse';
 import { levelCountsByJ } from './terms';
 import type { Subshell } from './types';
@@ -180,9 +173,18 @@ describe('jj levels of configurations', () => {
 
 describe('LS and jj give the same levels of each J', () => {
 	it('assertLsJjAgree names the first J where the counts differ', () => {
-		expect(() => assertLsJjAgree(new Map([[0, 2], [2, 1]]), new Map([[0, 2], [2, 2]]))).toThrow(
-			'LS and jj coupling disagree at J = 1: LS gives 1 level, jj gives 2'
-		);
+		expect(() =>
+			assertLsJjAgree(
+				new Map([
+					[0, 2],
+					[2, 1]
+				]),
+				new Map([
+					[0, 2],
+					[2, 2]
+				])
+			)
+		).toThrow('LS and jj coupling disagree at J = 1: LS gives 1 level, jj gives 2');
 		expect(() => assertLsJjAgree(new Map([[3, 1]]), new Map())).toThrow('at J = 3/2: LS gives 1 level, jj gives 0');
 		expect(() => assertLsJjAgree(levelCountsByJ(cfg('3d3')), jjLevelCountsByJ(cfg('3d3')))).not.toThrow();
 	});
@@ -194,13 +196,12 @@ describe('LS and jj give the same levels of each J', () => {
 	});
 
 	const subshellList = fc
-		.uniqueArray(
-			fc.record({ l: fc.integer({ min: 0, max: 3 }), slot: fc.integer({ min: 0, max: 3 }), fill: fc.nat() }),
-			{ minLength: 1, maxLength: 3, selector: (s) => `${s.l},${s.slot}` }
-		)
-		.map((list) =>
-			list.map(({ l, slot, fill }) => ({ n: l + 1 + slot, l, occupancy: 1 + (fill % (4 * l + 2)) }) satisfies Subshell)
-		);
+		.uniqueArray(fc.record({ l: fc.integer({ min: 0, max: 3 }), slot: fc.integer({ min: 0, max: 3 }), fill: fc.nat() }), {
+			minLength: 1,
+			maxLength: 3,
+			selector: (s) => `${s.l},${s.slot}`
+		})
+		.map((list) => list.map(({ l, slot, fill }) => ({ n: l + 1 + slot, l, occupancy: 1 + (fill % (4 * l + 2)) }) satisfies Subshell));
 
 	it('for random configurations of up to three s, p, d, f subshells (property, against levelCountsByJ of ./terms.ts)', () => {
 		fc.assert(

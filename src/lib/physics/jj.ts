@@ -229,7 +229,9 @@ function subshellTable(l: number, N: number): JTable {
 
 function toSafe(n: bigint, twoJ: number): number {
 	if (n > BigInt(Number.MAX_SAFE_INTEGER)) {
-		throw new RangeError(`the number of jj levels with J = ${halfString(twoJ)} is ${n}, too large to report exactly (above 2^53); use a smaller configuration`);
+		throw new RangeError(
+			`the number of jj levels with J = ${halfString(twoJ)} is ${n}, too large to report exactly (above 2^53); use a smaller configuration`
+		);
 	}
 	return Number(n);
 }
@@ -269,9 +271,7 @@ export function assertLsJjAgree(lsCounts: ReadonlyMap<number, number>, jjCounts:
 		const ls = lsCounts.get(twoJ) ?? 0;
 		const jj = jjCounts.get(twoJ) ?? 0;
 		if (ls !== jj) {
-			throw new Error(
-				`LS and jj coupling disagree at J = ${halfString(twoJ)}: LS gives ${ls} level${ls === 1 ? '' : 's'}, jj gives ${jj}`
-			);
+			throw new Error(`LS and jj coupling disagree at J = ${halfString(twoJ)}: LS gives ${ls} level${ls === 1 ? '' : 's'}, jj gives ${jj}`);
 		}
 	}
 }

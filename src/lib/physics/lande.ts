@@ -60,7 +60,8 @@ export function landeG(twoS: number, L: number, twoJ: number, options: LandeOpti
 	const ll = 4 * L * (L + 1);
 	const gs = options.gs ?? 'exact2';
 	if (gs === 'exact2') return new Fraction(jj + ss - ll, 2 * jj).add(1);
-	if (typeof gs !== 'number' || !Number.isFinite(gs)) throw new RangeError(`gs = ${String(gs)} is not allowed: give a finite number or 'exact2'`);
+	if (typeof gs !== 'number' || !Number.isFinite(gs))
+		throw new RangeError(`gs = ${String(gs)} is not allowed: give a finite number or 'exact2'`);
 	return (jj - ss + ll) / (2 * jj) + (gs * (jj + ss - ll)) / (2 * jj);
 }
 

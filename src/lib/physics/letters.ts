@@ -25,7 +25,9 @@ export const MAX_LETTER_L = L_LETTERS.length - 1;
  */
 export function lLetter(l: number): string {
 	if (!Number.isInteger(l) || l < 0 || l > MAX_LETTER_L) {
-		throw new RangeError(`l = ${l} has no letter: l must be an integer from 0 to ${MAX_LETTER_L} (letters ${L_LETTERS.split('').join(' ')})`);
+		throw new RangeError(
+			`l = ${l} has no letter: l must be an integer from 0 to ${MAX_LETTER_L} (letters ${L_LETTERS.split('').join(' ')})`
+		);
 	}
 	return L_LETTERS[l];
 }

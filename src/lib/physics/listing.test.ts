@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { combinations } from 'combinatorial-generators';
-import { DETERMINANT_LIST_LIMIT, MAX_MICROSTATE_PAGE, iterateMicrostates, listMicrostates, spinOrbitalAt, unrankCombination } from './listing';
+import {
+	DETERMINANT_LIST_LIMIT,
+	MAX_MICROSTATE_PAGE,
+	iterateMicrostates,
+	listMicrostates,
+	spinOrbitalAt,
+	unrankCombination
+} from './listing';
 import { binomial, countAt, microstateGrid } from './microstates';
 import { parseConfiguration } from './parse';
 
@@ -81,14 +88,22 @@ describe('paginated microstates', () => {
 
 describe('unranking determinants', () => {
 	it('unranking agrees with the lexicographic order of combinations (C(10, 5) = 252, all ranks)', () => {
-		const all = [...combinations(Array.from({ length: 10 }, (_, i) => i), 5)];
+		const all = [
+			...combinations(
+				Array.from({ length: 10 }, (_, i) => i),
+				5
+			)
+		];
 		all.forEach((c, k) => expect(unrankCombination(10, 5, BigInt(k))).toEqual(c));
 	});
 
 	it(`unranking agrees with combinations for g9, a subshell above the list limit of ${DETERMINANT_LIST_LIMIT}`, () => {
 		expect(binomial(18, 9) > BigInt(DETERMINANT_LIST_LIMIT)).toBe(true);
 		let k = 0n;
-		for (const c of combinations(Array.from({ length: 18 }, (_, i) => i), 9)) {
+		for (const c of combinations(
+			Array.from({ length: 18 }, (_, i) => i),
+			9
+		)) {
 			if (k % 97n === 0n) expect(unrankCombination(18, 9, k)).toEqual(c);
 			k++;
 		}

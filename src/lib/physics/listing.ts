@@ -101,7 +101,12 @@ function determinantAt(l: number, N: number, k: bigint): number[] {
 		const key = `${l},${N}`;
 		let list = listCache.get(key);
 		if (!list) {
-			list = [...combinations(Array.from({ length: M }, (_, i) => i), N)];
+			list = [
+				...combinations(
+					Array.from({ length: M }, (_, i) => i),
+					N
+				)
+			];
 			listCache.set(key, list);
 		}
 		return list[Number(k)];
@@ -114,7 +119,8 @@ function toIndex(offset: number | bigint): bigint {
 		if (offset < 0n) throw new RangeError(`offset ${offset} is not allowed: it must be a non-negative integer`);
 		return offset;
 	}
-	if (!Number.isSafeInteger(offset) || offset < 0) throw new RangeError(`offset ${offset} is not allowed: it must be a non-negative integer`);
+	if (!Number.isSafeInteger(offset) || offset < 0)
+		throw new RangeError(`offset ${offset} is not allowed: it must be a non-negative integer`);
 	return BigInt(offset);
 }
 

@@ -18,7 +18,11 @@ import type { Subshell } from './types';
 /** Random configurations of 1–4 distinct subshells with l ≤ 4 (built with fast-check). */
 const subshellArb = fc
 	.integer({ min: 1, max: 9 })
-	.chain((n) => fc.integer({ min: 0, max: Math.min(n - 1, 4) }).chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy }))));
+	.chain((n) =>
+		fc
+			.integer({ min: 0, max: Math.min(n - 1, 4) })
+			.chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy })))
+	);
 const configArb = fc.uniqueArray(subshellArb, { minLength: 1, maxLength: 4, selector: (s) => `${s.n},${s.l}` });
 
 describe('binomial coefficients', () => {
@@ -133,7 +137,12 @@ describe('grid shape', () => {
 
 	it('l^N and l^(4l+2−N) have the same grid (electron–hole symmetry)', () => {
 		// Condon & Shortley (1935): a subshell with N electrons and one with N holes have the same terms.
-		for (const [l, N] of [[1, 2], [2, 3], [3, 5], [4, 2]]) {
+		for (const [l, N] of [
+			[1, 2],
+			[2, 3],
+			[3, 5],
+			[4, 2]
+		]) {
 			expect(subshellGrid(l, 4 * l + 2 - N).counts).toEqual(subshellGrid(l, N).counts);
 		}
 	});
@@ -142,11 +151,15 @@ describe('grid shape', () => {
 		// Independent check of the 2-D convolution: direct double sum over the two grids.
 		const a = subshellGrid(2, 3);
 		const b = subshellGrid(1, 2);
-		const g = microstateGrid([{ n: 3, l: 2, occupancy: 3 }, { n: 4, l: 1, occupancy: 2 }] as Subshell[]);
+		const g = microstateGrid([
+			{ n: 3, l: 2, occupancy: 3 },
+			{ n: 4, l: 1, occupancy: 2 }
+		] as Subshell[]);
 		for (let ML = g.minML; ML <= g.maxML; ML++) {
 			for (let twoMS = -g.maxTwoMS; twoMS <= g.maxTwoMS; twoMS += 2) {
 				let sum = 0n;
-				for (let m1 = a.minML; m1 <= a.maxML; m1++) for (let s1 = -a.maxTwoMS; s1 <= a.maxTwoMS; s1 += 2) sum += countAt(a, m1, s1) * countAt(b, ML - m1, twoMS - s1);
+				for (let m1 = a.minML; m1 <= a.maxML; m1++)
+					for (let s1 = -a.maxTwoMS; s1 <= a.maxTwoMS; s1 += 2) sum += countAt(a, m1, s1) * countAt(b, ML - m1, twoMS - s1);
 				expect(countAt(g, ML, twoMS)).toBe(sum);
 			}
 		}
@@ -154,7 +167,10 @@ describe('grid shape', () => {
 
 	it('M_J counts of a single s electron are one state each at M_J = ±1/2', () => {
 		const mj = mjCounts(subshellGrid(0, 1));
-		expect([...mj.entries()]).toEqual([[-1, 1n], [1, 1n]]);
+		expect([...mj.entries()]).toEqual([
+			[-1, 1n],
+			[1, 1n]
+		]);
 	});
 
 	it('subshellGrid refuses N above 2(2l+1)', () => {

@@ -33,7 +33,13 @@ describe('reading configurations', () => {
 		expect(cfg.parity).toBe('even');
 		expect(cfg.core).toBeNull();
 		expect(cfg.subshells.map((s) => [s.n, s.l, s.occupancy])).toEqual([
-			[1, 0, 2], [2, 0, 2], [2, 1, 6], [3, 0, 2], [3, 1, 6], [3, 2, 5], [4, 0, 1]
+			[1, 0, 2],
+			[2, 0, 2],
+			[2, 1, 6],
+			[3, 0, 2],
+			[3, 1, 6],
+			[3, 2, 5],
+			[4, 0, 1]
 		]);
 	});
 
@@ -56,7 +62,10 @@ describe('reading configurations', () => {
 	it('2p5 3p leaves out occupancy 1 and has even parity', () => {
 		// Parity (−1)^(5·1 + 1·1) = +1 (Condon & Shortley 1935; general fact).
 		const cfg = parseConfiguration('2p5 3p');
-		expect(cfg.subshells).toEqual([{ n: 2, l: 1, occupancy: 5 }, { n: 3, l: 1, occupancy: 1 }]);
+		expect(cfg.subshells).toEqual([
+			{ n: 2, l: 1, occupancy: 5 },
+			{ n: 3, l: 1, occupancy: 1 }
+		]);
 		expect(cfg.parity).toBe('even');
 	});
 
@@ -82,7 +91,10 @@ describe('reading configurations', () => {
 	});
 
 	it('high-l letters k, l … v are read, with n up to 20', () => {
-		expect(parseConfiguration('8k 9l2').subshells).toEqual([{ n: 8, l: 7, occupancy: 1 }, { n: 9, l: 8, occupancy: 2 }]);
+		expect(parseConfiguration('8k 9l2').subshells).toEqual([
+			{ n: 8, l: 7, occupancy: 1 },
+			{ n: 9, l: 8, occupancy: 2 }
+		]);
 		expect(parseConfiguration('20v').subshells[0].l).toBe(16);
 	});
 });
@@ -204,7 +216,11 @@ describe('writing configurations', () => {
 	it('writing then reading gives back the same configuration (random configurations)', () => {
 		const subshell = fc
 			.integer({ min: 1, max: 20 })
-			.chain((n) => fc.integer({ min: 0, max: Math.min(n - 1, 16) }).chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy }))));
+			.chain((n) =>
+				fc
+					.integer({ min: 0, max: Math.min(n - 1, 16) })
+					.chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy })))
+			);
 		const list = fc.uniqueArray(subshell, { minLength: 1, maxLength: 8, selector: (s) => `${s.n},${s.l}` });
 		fc.assert(
 			fc.property(list, fc.boolean(), fc.boolean(), (subshells, superscripts, compactCore) => {
@@ -219,7 +235,13 @@ describe('writing configurations', () => {
 
 describe('checked subshell lists', () => {
 	it('configurationOf sorts, counts electrons and checks each subshell', () => {
-		const cfg = configurationOf([{ n: 4, l: 0, occupancy: 1 }, { n: 3, l: 2, occupancy: 5 }], 'Ar');
+		const cfg = configurationOf(
+			[
+				{ n: 4, l: 0, occupancy: 1 },
+				{ n: 3, l: 2, occupancy: 5 }
+			],
+			'Ar'
+		);
 		expect(cfg.electrons).toBe(24);
 		expect(cfg.core).toBe('Ar');
 		expect(() => configurationOf([{ n: 2, l: 2, occupancy: 1 }])).toThrow(ConfigurationError);
@@ -233,5 +255,41 @@ describe('checked subshell lists', () => {
 
 	it('openSubshells leaves out closed subshells', () => {
 		expect(openSubshells(parseConfiguration('[Ar] 3d5 4s')).map((s) => s.l)).toEqual([2, 0]);
+	});
+});
+
+describe('parent terms typed in parentheses', () => {
+	it('3d6(5D) 4s reads as 3d6 4s with the parent ⁵D on 3d', () => {
+		// Notation of the reference tables, e.g. Fe II 3d⁶(⁵D)4s (NIST ASD, from memory).
+		const cfg = parseConfiguration('3d6(5D) 4s');
+		expect(cfg.subshells).toEqual(parseConfiguration('3d6 4s').subshells);
+		expect(cfg.parents).toEqual([{ n: 3, l: 2, own: { twoS: 4, L: 2, seniority: null, index: null }, intermediate: null }]);
+	});
+
+	it('superscripts, the odd mark, seniority and index are read; no space is needed after the parenthesis', () => {
+		expect(parseConfiguration('3d⁶(⁵D)4s').parents?.[0].own).toMatchObject({ twoS: 4, L: 2 });
+		expect(parseConfiguration('2p5(2P°) 3p').parents?.[0]).toMatchObject({ own: null, intermediate: { twoS: 1, L: 1 } });
+		expect(parseConfiguration('3d4(3F, v=2) 4s').parents?.[0].own).toEqual({ twoS: 2, L: 3, seniority: 2, index: null });
+		expect(parseConfiguration('4f3(2D,v=3,#2) 6s').parents?.[0].own).toEqual({ twoS: 1, L: 2, seniority: 3, index: 2 });
+		expect(parseConfiguration('3d6(5D).4s').subshells).toHaveLength(2);
+	});
+
+	it('a lone electron takes the intermediate term: 3d5(6S) 4s(7S) 4p', () => {
+		const cfg = parseConfiguration('3d5(6S) 4s(7S) 4p');
+		expect(cfg.parents?.map((p) => [p.n, p.l, p.own?.twoS ?? null, p.intermediate?.twoS ?? null])).toEqual([
+			[3, 2, 5, null],
+			[4, 0, null, 6]
+		]);
+	});
+
+	it('configurations without parentheses carry no parents field', () => {
+		expect(parseConfiguration('[Ar] 3d5 4s')).not.toHaveProperty('parents');
+	});
+
+	it('bad parent terms are refused with what is allowed', () => {
+		expect(errorOf('3d6(5X) 4s').message).toMatch(/not a term letter/);
+		expect(errorOf('3d6(D) 4s').message).toMatch(/write the term as multiplicity and letter/);
+		expect(errorOf('2p6(1S) 3s').message).toMatch(/2p6 is full/);
+		expect(errorOf('3d6 4s(6D)').message).toMatch(/last open subshell/);
 	});
 });

@@ -63,5 +63,9 @@ export function seniorityTable(l: number, N: number): SeniorityEntry[] {
  * @example senioritiesOf(2, 5, 1, 2) // [1, 3, 5] (d⁵ ²D occurs three times)
  */
 export function senioritiesOf(l: number, N: number, twoS: number, L: number): number[] {
-	return seniorityTable(l, N).find((t) => t.twoS === twoS && t.L === L)?.seniorities.slice() ?? [];
+	return (
+		seniorityTable(l, N)
+			.find((t) => t.twoS === twoS && t.L === L)
+			?.seniorities.slice() ?? []
+	);
 }

@@ -127,7 +127,11 @@ describe('levels and weights', () => {
 describe('invariants on random configurations', () => {
 	const subshellArb = fc
 		.integer({ min: 1, max: 9 })
-		.chain((n) => fc.integer({ min: 0, max: Math.min(n - 1, 4) }).chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy }))));
+		.chain((n) =>
+			fc
+				.integer({ min: 0, max: Math.min(n - 1, 4) })
+				.chain((l) => fc.integer({ min: 1, max: 4 * l + 2 }).map((occupancy) => ({ n, l, occupancy })))
+		);
 	const configArb = fc.uniqueArray(subshellArb, { minLength: 1, maxLength: 4, selector: (s) => `${s.n},${s.l}` });
 
 	it('Σ statistical weight × count equals the number of microstates', () => {

@@ -65,7 +65,8 @@ export function levelsOf(term: TermLike): Level[] {
 }
 
 function checkTerm(term: TermLike): void {
-	if (!Number.isInteger(term.twoS) || term.twoS < 0) throw new RangeError(`twoS = ${term.twoS} is not allowed: 2S must be a non-negative integer`);
+	if (!Number.isInteger(term.twoS) || term.twoS < 0)
+		throw new RangeError(`twoS = ${term.twoS} is not allowed: 2S must be a non-negative integer`);
 	if (!Number.isInteger(term.L) || term.L < 0) throw new RangeError(`L = ${term.L} is not allowed: L must be a non-negative integer`);
 }
 

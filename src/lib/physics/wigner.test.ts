@@ -413,7 +413,10 @@ describe('6j closed forms of Edmonds (1957) Table 5 (s = a + b + c)', () => {
 	}
 
 	it('{a b c; 0 c b} = (−1)^s / [(2b+1)(2c+1)]^{1/2}', () => {
-		each((tb, tc) => [0, tc, tb], (a, b, c) => closedForm(sgn(a + b + c), [1], [2 * b + 1, 2 * c + 1]));
+		each(
+			(tb, tc) => [0, tc, tb],
+			(a, b, c) => closedForm(sgn(a + b + c), [1], [2 * b + 1, 2 * c + 1])
+		);
 	});
 
 	it('{a b c; 1/2 c−1/2 b+1/2} = (−1)^s [(s−2b)(s−2c+1)/((2b+1)(2b+2)2c(2c+1))]^{1/2}', () => {
@@ -441,11 +444,7 @@ describe('6j closed forms of Edmonds (1957) Table 5 (s = a + b + c)', () => {
 			(tb, tc) => [2, tc - 2, tb - 2],
 			(a, b, c) => {
 				const s = a + b + c;
-				return closedForm(
-					sgn(s),
-					[s, s + 1, s - 2 * a - 1, s - 2 * a],
-					[2 * b - 1, 2 * b, 2 * b + 1, 2 * c - 1, 2 * c, 2 * c + 1]
-				);
+				return closedForm(sgn(s), [s, s + 1, s - 2 * a - 1, s - 2 * a], [2 * b - 1, 2 * b, 2 * b + 1, 2 * c - 1, 2 * c, 2 * c + 1]);
 			}
 		);
 	});
@@ -642,7 +641,13 @@ describe('6j symmetries and identities', () => {
 
 /** A random 9j argument list (doubled, j ≤ 2, or ≤ 3 for the upper entries) with all rows and columns triads. */
 const nineJArgs = fc
-	.tuple(fc.integer({ min: 0, max: 4 }), fc.integer({ min: 0, max: 4 }), fc.integer({ min: 0, max: 4 }), fc.integer({ min: 0, max: 4 }), fc.array(fc.nat(), { minLength: 5, maxLength: 5 }))
+	.tuple(
+		fc.integer({ min: 0, max: 4 }),
+		fc.integer({ min: 0, max: 4 }),
+		fc.integer({ min: 0, max: 4 }),
+		fc.integer({ min: 0, max: 4 }),
+		fc.array(fc.nat(), { minLength: 5, maxLength: 5 })
+	)
 	.map(([t1, t2, t4, t5, [i, k, l, m, n]]) => {
 		const pick = (xs: number[], s: number) => (xs.length === 0 ? null : xs[s % xs.length]);
 		const t3 = pick(triadRange(t1, t2), i);
@@ -776,7 +781,12 @@ describe('9j symbols', () => {
 				const [t1, t2, t3, t4, t5, t6, t7, t8, t9] = a;
 				let total = 0;
 				for (let x = 0; x <= 16; x++) {
-					total += sgn(x) * (x + 1) * wigner6jFloat(t1, t4, t7, t8, t9, x) * wigner6jFloat(t2, t5, t8, t4, x, t6) * wigner6jFloat(t3, t6, t9, x, t1, t2);
+					total +=
+						sgn(x) *
+						(x + 1) *
+						wigner6jFloat(t1, t4, t7, t8, t9, x) *
+						wigner6jFloat(t2, t5, t8, t4, x, t6) *
+						wigner6jFloat(t3, t6, t9, x, t1, t2);
 				}
 				expect(Math.abs(total - wigner9jFloat(t1, t2, t3, t4, t5, t6, t7, t8, t9))).toBeLessThan(FLOAT_TOLERANCE);
 			}),
@@ -797,7 +807,10 @@ describe('evaluateSymbol', () => {
 	it('evaluates 3j (1 1 0; 1 −1 0) = 1/sqrt(3) (Edmonds Table 2 first form), 6j {1 1 1; 1 1 1} = 1/6, and a zero 9j', () => {
 		expect(evaluateSymbol('3j', ['1', '1', '0', '1', '-1', '0']).exact).toEqual({ sign: 1, squared: '1/3' });
 		expect(evaluateSymbol('6j', ['1', '1', '1', '1', '1', '1']).text).toBe('1/6');
-		expect(evaluateSymbol('9j', ['1', '1', '1', '1', '1', '1', '1', '1', '1'])).toMatchObject({ value: 0, exact: { sign: 0, squared: '0' } });
+		expect(evaluateSymbol('9j', ['1', '1', '1', '1', '1', '1', '1', '1', '1'])).toMatchObject({
+			value: 0,
+			exact: { sign: 0, squared: '0' }
+		});
 		// (j j 0; m −m 0) with j = 3/2, m = −1/2: (−1)^{j−m}/sqrt(2j+1) = +1/2 (Edmonds Table 2)
 		expect(evaluateSymbol('3j', ['1.5', '1.5', '0', '-0.5', '0.5', '0']).exact).toEqual({ sign: 1, squared: '1/4' });
 		expect(evaluateSymbol('3j', ['1.5', '1.5', '0', '1/2', '-1/2', '0']).exact).toEqual({ sign: -1, squared: '1/4' });
@@ -809,7 +822,9 @@ describe('evaluateSymbol', () => {
 		expect(() => evaluateSymbol('12j' as never, ['1'])).toThrow(/kind must be one of 3j, 6j, 9j, cg/);
 	});
 	it('names a value that is not an integer or half-integer, a negative j and an out-of-range m', () => {
-		expect(() => evaluateSymbol('6j', ['1', '1', '1/3', '1', '1', '1'])).toThrow('6j argument 3 (j3) = "1/3" is not an integer or half-integer');
+		expect(() => evaluateSymbol('6j', ['1', '1', '1/3', '1', '1', '1'])).toThrow(
+			'6j argument 3 (j3) = "1/3" is not an integer or half-integer'
+		);
 		expect(() => evaluateSymbol('6j', ['1', '-1', '1', '1', '1', '1'])).toThrow('6j argument 2 (j2) = -1 must be ≥ 0');
 		expect(() => evaluateSymbol('cg', ['1', '2', '1', '0', '1', '0'])).toThrow(/\|m1\| = 2 exceeds j1 = 1/);
 	});

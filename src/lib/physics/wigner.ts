@@ -27,9 +27,7 @@ import { halfString, parseHalf } from './half';
 
 function checkJ(where: string, name: string, tj: number): void {
 	if (!Number.isInteger(tj) || tj < 0) {
-		throw new RangeError(
-			`${where}: ${name} must be given as twice its value, a non-negative integer (j = 0, 1/2, 1, …), got ${tj}`
-		);
+		throw new RangeError(`${where}: ${name} must be given as twice its value, a non-negative integer (j = 0, 1/2, 1, …), got ${tj}`);
 	}
 }
 
@@ -270,11 +268,9 @@ export function wigner9j(
 			rationalMultiply(triangleSquared(tj1, tj9, tx), triangleSquared(tj8, tj4, tx)),
 			triangleSquared(tj2, tx, tj6)
 		);
-		const sums = [
-			sixJSum(tj1, tj4, tj7, tj8, tj9, tx),
-			sixJSum(tj2, tj5, tj8, tj4, tx, tj6),
-			sixJSum(tj3, tj6, tj9, tx, tj1, tj2)
-		].reduce(rationalMultiply);
+		const sums = [sixJSum(tj1, tj4, tj7, tj8, tj9, tx), sixJSum(tj2, tj5, tj8, tj4, tx, tj6), sixJSum(tj3, tj6, tj9, tx, tj1, tj2)].reduce(
+			rationalMultiply
+		);
 		const weight = rational(BigInt(minusOnePower(tx) * (tx + 1)), 1n);
 		total = rationalAdd(total, rationalMultiply(weight, rationalMultiply(xDeltas, sums)));
 	}
@@ -366,9 +362,7 @@ export function evaluateSymbol(kind: SymbolKind, args: string[]): SymbolValue {
 		try {
 			t = parseHalf(String(text));
 		} catch {
-			throw new RangeError(
-				`${kind} argument ${i + 1} (${name}) = "${text}" is not an integer or half-integer (write e.g. 2, 3/2 or -1/2)`
-			);
+			throw new RangeError(`${kind} argument ${i + 1} (${name}) = "${text}" is not an integer or half-integer (write e.g. 2, 3/2 or -1/2)`);
 		}
 		const isProjection = name.startsWith('m') || name === 'M';
 		if (!isProjection && t < 0) throw new RangeError(`${kind} argument ${i + 1} (${name}) = ${text} must be ≥ 0`);

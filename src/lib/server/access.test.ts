@@ -7,7 +7,16 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { ServiceError } from './errors';
 import { roleAtLeast, type Actor } from './access';
 import { signUp } from './services/users';
-import { addMember, changeMemberRole, createProject, deleteProject, getProject, listMembers, removeMember, updateProject } from './services/projects';
+import {
+	addMember,
+	changeMemberRole,
+	createProject,
+	deleteProject,
+	getProject,
+	listMembers,
+	removeMember,
+	updateProject
+} from './services/projects';
 import { createEntry, getEntry, listEntries, updateEntry, deleteEntry } from './services/shelf';
 
 function statusOf(call: () => unknown): number | 'ok' {

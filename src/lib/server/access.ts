@@ -41,7 +41,10 @@ export function projectAccess(actor: Actor | null, projectId: string, needed: Pr
 	// Non-members cannot learn that the project exists.
 	if (!row) throw new ServiceError(404, 'No such project');
 	if (!roleAtLeast(row.role, needed))
-		throw new ServiceError(403, `Your role here is ${row.role}; only ${needed === 'viewer' ? 'a' : 'an'} ${needed} may ${WHAT_ROLE_ALLOWS[needed]}`);
+		throw new ServiceError(
+			403,
+			`Your role here is ${row.role}; only ${needed === 'viewer' ? 'a' : 'an'} ${needed} may ${WHAT_ROLE_ALLOWS[needed]}`
+		);
 	return { project: row.project, role: row.role };
 }
 

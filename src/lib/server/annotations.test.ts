@@ -39,7 +39,13 @@ describe('level annotations', () => {
 	});
 
 	it('an editor records an observed energy; who and when are kept', () => {
-		const a = saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 111.1, uncertainty: 0.2, status: 'proposed', comment: 'invented value' });
+		const a = saveAnnotation(editor, projectId, entryId, {
+			levelKey: '3P#1|1',
+			observedEnergy: 111.1,
+			uncertainty: 0.2,
+			status: 'proposed',
+			comment: 'invented value'
+		});
 		expect(a).toMatchObject({ observedEnergy: 111.1, uncertainty: 0.2, version: 1, updatedBy: 'Ed Itor' });
 	});
 

@@ -23,4 +23,3 @@ declare module 'lucia' {
 		DatabaseUserAttributes: { email: string; name: string; siteRole: SiteRole };
 	}
 }
-

@@ -14,7 +14,5 @@ export class ServiceError extends Error {
 }
 
 export const notFound = (what = 'Not found') => new ServiceError(404, what);
-export const badRequest = (message: string, details: Record<string, unknown> = {}) =>
-	new ServiceError(400, message, details);
-export const conflict = (message: string, details: Record<string, unknown> = {}) =>
-	new ServiceError(409, message, details);
+export const badRequest = (message: string, details: Record<string, unknown> = {}) => new ServiceError(400, message, details);
+export const conflict = (message: string, details: Record<string, unknown> = {}) => new ServiceError(409, message, details);

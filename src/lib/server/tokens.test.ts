@@ -11,7 +11,13 @@ describe('API tokens', () => {
 		const { id, secret } = createToken(me, 'line list loader');
 		expect(secret.startsWith('tw_')).toBe(true);
 		expect(actorForToken(secret)?.id).toBe(me.id);
-		expect(db.select().from(apiTokens).all().some((t) => t.tokenHash === secret)).toBe(false);
+		expect(
+			db
+				.select()
+				.from(apiTokens)
+				.all()
+				.some((t) => t.tokenHash === secret)
+		).toBe(false);
 		expect(listTokens(me)[0].lastUsedAt).not.toBeNull();
 		revokeToken(me, id);
 		expect(actorForToken(secret)).toBeNull();

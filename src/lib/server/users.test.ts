@@ -31,7 +31,9 @@ describe('accounts', () => {
 		await signUp({ name: 'Locked', email: 'locked@example.org', password: 'right-password-1' });
 		for (let i = 0; i < 5; i++)
 			await expect(checkPassword({ email: 'locked@example.org', password: 'nope-nope' }, '10.0.0.3')).rejects.toThrow(SIGN_IN_FAILED);
-		await expect(checkPassword({ email: 'locked@example.org', password: 'right-password-1' }, '10.0.0.3')).rejects.toThrow(/Too many sign-in attempts/);
+		await expect(checkPassword({ email: 'locked@example.org', password: 'right-password-1' }, '10.0.0.3')).rejects.toThrow(
+			/Too many sign-in attempts/
+		);
 	});
 
 	it('refuses short passwords and malformed e-mails with what is allowed', async () => {

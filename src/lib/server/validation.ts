@@ -32,7 +32,10 @@ export const signUpSchema = z.object({
 
 export const signInSchema = z.object({
 	email: emailSchema,
-	password: z.string({ error: 'Password must be text' }).min(1, 'Password must not be empty').max(200, 'Password must be at most 200 characters')
+	password: z
+		.string({ error: 'Password must be text' })
+		.min(1, 'Password must not be empty')
+		.max(200, 'Password must be at most 200 characters')
 });
 
 export const projectInputSchema = z.object({

@@ -24,7 +24,15 @@ export function peelOrder(sheet: TermSheet): PeelTerm[] {
 	const list: PeelTerm[] = [];
 	for (const t of sheet.terms) {
 		for (let k = 1; k <= t.count; k++) {
-			list.push({ key: termKey(t), multiplicity: t.multiplicity, letter: t.letter, twoS: t.multiplicity - 1, L: t.L, occurrence: k, count: t.count });
+			list.push({
+				key: termKey(t),
+				multiplicity: t.multiplicity,
+				letter: t.letter,
+				twoS: t.multiplicity - 1,
+				L: t.L,
+				occurrence: k,
+				count: t.count
+			});
 		}
 	}
 	return list.sort((a, b) => b.twoS - a.twoS || b.L - a.L || a.occurrence - b.occurrence);

@@ -47,17 +47,59 @@ export interface SheetColumn {
 }
 
 export const SHEET_COLUMNS: SheetColumn[] = [
-	{ id: 'level', label: 'Level', title: 'Level symbol ²ˢ⁺¹L_J (° marks odd parity)', numeric: false, termColumn: false, sortValue: (r) => [r.term.multiplicity, r.term.L, halfValue(r.level.J)] },
+	{
+		id: 'level',
+		label: 'Level',
+		title: 'Level symbol ²ˢ⁺¹L_J (° marks odd parity)',
+		numeric: false,
+		termColumn: false,
+		sortValue: (r) => [r.term.multiplicity, r.term.L, halfValue(r.level.J)]
+	},
 	{ id: 'count', label: 'Count', title: 'How often the term occurs', numeric: true, termColumn: true, sortValue: (r) => [r.term.count] },
-	{ id: 'v', label: 'v', title: 'Seniority (Racah), one per occurrence; single open subshell only', numeric: true, termColumn: true, sortValue: (r) => [r.term.seniorities?.[0] ?? -1] },
+	{
+		id: 'v',
+		label: 'v',
+		title: 'Seniority (Racah), one per occurrence; single open subshell only',
+		numeric: true,
+		termColumn: true,
+		sortValue: (r) => [r.term.seniorities?.[0] ?? -1]
+	},
 	{ id: 'S', label: 'S', title: 'Total spin', numeric: true, termColumn: true, sortValue: (r) => [halfValue(r.term.S)] },
 	{ id: 'L', label: 'L', title: 'Total orbital angular momentum', numeric: true, termColumn: true, sortValue: (r) => [r.term.L] },
 	{ id: 'parity', label: 'Parity', title: 'Parity (−1)^Σl', numeric: false, termColumn: true, sortValue: (r) => [r.odd ? 1 : 0] },
-	{ id: 'weight', label: '(2S+1)(2L+1)', title: 'Statistical weight of one occurrence of the term', numeric: true, termColumn: true, sortValue: (r) => [r.term.weight] },
+	{
+		id: 'weight',
+		label: '(2S+1)(2L+1)',
+		title: 'Statistical weight of one occurrence of the term',
+		numeric: true,
+		termColumn: true,
+		sortValue: (r) => [r.term.weight]
+	},
 	{ id: 'J', label: 'J', title: 'Total angular momentum', numeric: true, termColumn: false, sortValue: (r) => [halfValue(r.level.J)] },
-	{ id: 'g', label: 'g_J exact', title: 'Landé g-factor as a fraction, with g_s = 2', numeric: true, termColumn: false, sortValue: (r) => [r.level.gDecimal ?? -Infinity] },
-	{ id: 'gDecimal', label: 'g_J decimal', title: 'Landé g-factor as a decimal, with the chosen g_s', numeric: true, termColumn: false, sortValue: (r) => [r.level.gDecimal ?? -Infinity] },
-	{ id: 'weightJ', label: '2J+1', title: 'Statistical weight of the level', numeric: true, termColumn: false, sortValue: (r) => [r.level.weight] }
+	{
+		id: 'g',
+		label: 'g_J exact',
+		title: 'Landé g-factor as a fraction, with g_s = 2',
+		numeric: true,
+		termColumn: false,
+		sortValue: (r) => [r.level.gDecimal ?? -Infinity]
+	},
+	{
+		id: 'gDecimal',
+		label: 'g_J decimal',
+		title: 'Landé g-factor as a decimal, with the chosen g_s',
+		numeric: true,
+		termColumn: false,
+		sortValue: (r) => [r.level.gDecimal ?? -Infinity]
+	},
+	{
+		id: 'weightJ',
+		label: '2J+1',
+		title: 'Statistical weight of the level',
+		numeric: true,
+		termColumn: false,
+		sortValue: (r) => [r.level.weight]
+	}
 ];
 
 export type SortDir = 'ascending' | 'descending';

@@ -32,7 +32,9 @@ export function termText(multiplicity: number | string, letter: string, odd: boo
 const LS_LEVEL = /^(\d+)([A-Z])(°?)(\d+(?:\/2)?)(?:\s*\((\d+)\))?$/;
 
 /** Splits an LS level label of the bridge ("2D3/2 (1)") into its parts; null if it does not look like one. */
-export function parseLsLevel(label: string): { multiplicity: string; letter: string; odd: boolean; J: string; index: number | null } | null {
+export function parseLsLevel(
+	label: string
+): { multiplicity: string; letter: string; odd: boolean; J: string; index: number | null } | null {
 	const m = LS_LEVEL.exec(label.trim());
 	if (!m) return null;
 	return { multiplicity: m[1], letter: m[2], odd: m[3] === '°', J: m[4], index: m[5] ? Number(m[5]) : null };

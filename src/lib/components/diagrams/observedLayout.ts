@@ -74,8 +74,7 @@ export function observedLayout(levels: readonly ObservedLevelInput[]) {
 		.map(({ id, ls }, i) => {
 			const placed: PlacedLevel[] = ls.map((l) => ({ ...l, y: y(l.energy), labelY: y(l.energy) }));
 			// Push labels upward (lower y) so none is closer than minLabelGap to the one below it.
-			for (let k = 1; k < placed.length; k++)
-				placed[k].labelY = Math.min(placed[k].labelY, placed[k - 1].labelY - G.minLabelGap);
+			for (let k = 1; k < placed.length; k++) placed[k].labelY = Math.min(placed[k].labelY, placed[k - 1].labelY - G.minLabelGap);
 			return {
 				id,
 				x: G.axisX + 24 + i * G.columnWidth,

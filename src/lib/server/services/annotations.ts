@@ -47,7 +47,18 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 		const term = byTerm.get(ref.term)!;
 		const level = term.levels.find((lv) => lv.J === ref.J)!;
 		const key = levelKey(ref);
-		return { key, ...ref, multiplicity: term.multiplicity, letter: term.letter, count: term.count, g: level.g, gDecimal: level.gDecimal, hundRank: term.hundRank, jRank: term.jOrder.indexOf(ref.J), annotation: notes.get(key) ?? null };
+		return {
+			key,
+			...ref,
+			multiplicity: term.multiplicity,
+			letter: term.letter,
+			count: term.count,
+			g: level.g,
+			gDecimal: level.gDecimal,
+			hundRank: term.hundRank,
+			jRank: term.jOrder.indexOf(ref.J),
+			annotation: notes.get(key) ?? null
+		};
 	});
 	// Hund's heuristic order (ground level first), then occurrence, then J in the expected multiplet order.
 	levels.sort((a, b) => a.hundRank - b.hundRank || a.occurrence - b.occurrence || a.jRank - b.jRank);
@@ -60,9 +71,12 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 	const entry = readEntry(projectId, entryId);
 	const known = new Set(levelRefs(termSheet(entry.notation).terms).map(levelKey));
 	if (!known.has(data.levelKey))
-		throw badRequest(`"${data.levelKey}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`, {
-			field: 'levelKey'
-		});
+		throw badRequest(
+			`"${data.levelKey}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`,
+			{
+				field: 'levelKey'
+			}
+		);
 	return db.transaction((tx) => {
 		const current = tx
 			.select()
@@ -78,7 +92,9 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 			updatedAt: new Date()
 		};
 		if (!current) {
-			tx.insert(levelAnnotations).values({ id: newId(), entryId, levelKey: data.levelKey, ...values }).run();
+			tx.insert(levelAnnotations)
+				.values({ id: newId(), entryId, levelKey: data.levelKey, ...values })
+				.run();
 		} else {
 			if (data.version !== undefined && data.version !== current.version)
 				throw conflict(

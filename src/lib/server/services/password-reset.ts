@@ -32,7 +32,11 @@ export async function requestPasswordReset(input: unknown, origin: string): Prom
 
 /** The account a reset token belongs to, or null when it is unknown or expired. */
 export function resetTokenUser(token: string) {
-	const row = db.select().from(passwordResets).where(eq(passwordResets.tokenHash, sha256(token))).get();
+	const row = db
+		.select()
+		.from(passwordResets)
+		.where(eq(passwordResets.tokenHash, sha256(token)))
+		.get();
 	if (!row || row.expiresAt.getTime() < Date.now()) return null;
 	return db.select({ id: users.id, email: users.email }).from(users).where(eq(users.id, row.userId)).get() ?? null;
 }

@@ -58,7 +58,12 @@ export function readEntry(projectId: string, entryId: string) {
 
 export function listEntries(actor: Actor, projectId: string) {
 	projectAccess(actor, projectId, 'viewer');
-	return db.select(entryColumns).from(shelfEntries).where(eq(shelfEntries.projectId, projectId)).orderBy(desc(shelfEntries.updatedAt)).all();
+	return db
+		.select(entryColumns)
+		.from(shelfEntries)
+		.where(eq(shelfEntries.projectId, projectId))
+		.orderBy(desc(shelfEntries.updatedAt))
+		.all();
 }
 
 export function getEntry(actor: Actor, projectId: string, entryId: string) {

@@ -30,12 +30,17 @@ export function createToken(actor: Actor, name: unknown): { id: string; secret: 
 	const cleanName = parseInput(nameSchema, name);
 	const secret = TOKEN_PREFIX + randomBytes(24).toString('base64url');
 	const id = newId();
-	db.insert(apiTokens).values({ id, userId: actor.id, name: cleanName, tokenHash: sha256(secret) }).run();
+	db.insert(apiTokens)
+		.values({ id, userId: actor.id, name: cleanName, tokenHash: sha256(secret) })
+		.run();
 	return { id, secret };
 }
 
 export function revokeToken(actor: Actor, tokenId: string) {
-	const result = db.delete(apiTokens).where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, actor.id))).run();
+	const result = db
+		.delete(apiTokens)
+		.where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, actor.id)))
+		.run();
 	if (result.changes === 0) throw notFound('No such token');
 }
 

@@ -28,7 +28,10 @@ export async function signUp(input: unknown): Promise<Actor> {
 	const id = newId();
 	return db.transaction((tx) => {
 		// The first account on a fresh site administers it.
-		const count = tx.select({ n: sql<number>`count(*)` }).from(users).get()!.n;
+		const count = tx
+			.select({ n: sql<number>`count(*)` })
+			.from(users)
+			.get()!.n;
 		const siteRole = count === 0 ? 'admin' : 'member';
 		tx.insert(users).values({ id, email: data.email, name: data.name, passwordHash, siteRole }).run();
 		return { id, email: data.email, name: data.name, siteRole };
@@ -44,7 +47,9 @@ export async function checkPassword(input: unknown, address: string): Promise<Ac
 		throw new ServiceError(429, `Too many sign-in attempts; try again in ${Math.ceil(wait / 60)} minute${wait > 60 ? 's' : ''}`);
 	const user = db.select().from(users).where(eq(users.email, data.email)).get();
 	// Verify against a dummy hash for unknown e-mails so timing does not tell them apart.
-	const ok = user ? await verifyPassword(user.passwordHash, data.password) : (await verifyPassword(await dummyHash(), data.password), false);
+	const ok = user
+		? await verifyPassword(user.passwordHash, data.password)
+		: (await verifyPassword(await dummyHash(), data.password), false);
 	if (!user || !ok) {
 		perAccount.hit(accountKey);
 		perAddress.hit(addressKey);
@@ -73,7 +78,11 @@ export function setSiteRole(actor: Actor, userId: string, role: unknown) {
 		const user = tx.select().from(users).where(eq(users.id, userId)).get();
 		if (!user) throw notFound('No such user');
 		if (user.siteRole === 'admin' && siteRole !== 'admin') {
-			const admins = tx.select({ n: sql<number>`count(*)` }).from(users).where(eq(users.siteRole, 'admin')).get()!.n;
+			const admins = tx
+				.select({ n: sql<number>`count(*)` })
+				.from(users)
+				.where(eq(users.siteRole, 'admin'))
+				.get()!.n;
 			if (admins === 1) throw new ServiceError(409, 'The site needs at least one admin; make someone else admin first');
 		}
 		tx.update(users).set({ siteRole }).where(eq(users.id, userId)).run();

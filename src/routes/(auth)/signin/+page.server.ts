@@ -15,10 +15,9 @@ export const actions: Actions = {
 	default: async (event) => {
 		const form = await event.request.formData();
 		const email = String(form.get('email') ?? '');
-		const result = await forAction(() =>
-			checkPassword({ email, password: String(form.get('password') ?? '') }, event.getClientAddress()),
-			{ email }
-		);
+		const result = await forAction(() => checkPassword({ email, password: String(form.get('password') ?? '') }, event.getClientAddress()), {
+			email
+		});
 		if (!result.ok) return result.failure;
 		await startSession(event.cookies, result.value.id);
 		redirect(303, safeNext(event.url.searchParams.get('next')));

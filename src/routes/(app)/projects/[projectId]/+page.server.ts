@@ -25,8 +25,7 @@ export const actions: Actions = {
 		const user = requireUser(event);
 		const form = await event.request.formData();
 		const project = forPage(() => getProject(user, event.params.projectId));
-		if (String(form.get('confirm') ?? '') !== project.name)
-			return { deleteMessage: `Type the project name "${project.name}" to confirm` };
+		if (String(form.get('confirm') ?? '') !== project.name) return { deleteMessage: `Type the project name "${project.name}" to confirm` };
 		const result = await forAction(() => deleteProject(user, event.params.projectId));
 		if (!result.ok) return result.failure;
 		redirect(303, '/projects');

@@ -12,7 +12,9 @@ export const actions: Actions = {
 		const user = requireUser(event);
 		const form = await event.request.formData();
 		const email = String(form.get('email') ?? '');
-		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: String(form.get('role') ?? '') }), { email });
+		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: String(form.get('role') ?? '') }), {
+			email
+		});
 		return result.ok ? { added: result.value.name } : result.failure;
 	},
 	role: async (event) => {

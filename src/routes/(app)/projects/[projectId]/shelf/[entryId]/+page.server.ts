@@ -14,7 +14,9 @@ export const load: PageServerLoad = (event) => {
 
 /** '' → null; anything else must read as a number (zod then says what is allowed). */
 const optionalNumber = (v: FormDataEntryValue | null) => {
-	const text = String(v ?? '').trim().replace(',', '.');
+	const text = String(v ?? '')
+		.trim()
+		.replace(',', '.');
 	return text === '' ? null : Number(text);
 };
 
@@ -24,7 +26,9 @@ export const actions: Actions = {
 		const form = await event.request.formData();
 		const values = shelfFieldsFrom(form);
 		const version = Number(form.get('version'));
-		const result = await forAction(() => updateEntry(user, event.params.projectId, event.params.entryId, { ...values, version }), { values });
+		const result = await forAction(() => updateEntry(user, event.params.projectId, event.params.entryId, { ...values, version }), {
+			values
+		});
 		return result.ok ? { saved: true } : result.failure;
 	},
 	annotate: async (event) => {

@@ -9,7 +9,9 @@ export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
 	forPage(() => projectAccess(user, event.params.projectId, 'editor'));
 	const q = event.url.searchParams;
-	return { prefill: { title: q.get('title') ?? '', species: q.get('species') ?? '', notation: q.get('config') ?? '', notes: '', tags: [] } };
+	return {
+		prefill: { title: q.get('title') ?? '', species: q.get('species') ?? '', notation: q.get('config') ?? '', notes: '', tags: [] }
+	};
 };
 
 export const actions: Actions = {
