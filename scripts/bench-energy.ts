@@ -22,14 +22,42 @@ function median(values: number[]): number {
 
 // Invented but typical magnitudes (cm⁻¹).
 const PARAMS: Record<string, Parameters<typeof intermediateLevels>[1]> = {
-	'3d5': { F: [{ k: 2, a: '3d', b: '3d', value: 80000 }, { k: 4, a: '3d', b: '3d', value: 50000 }], zeta: [{ shell: '3d', value: 400 }] },
-	'4f3': { F: [{ k: 2, a: '4f', b: '4f', value: 70000 }, { k: 4, a: '4f', b: '4f', value: 50000 }, { k: 6, a: '4f', b: '4f', value: 36000 }], zeta: [{ shell: '4f', value: 880 }] },
-	'4f7': { F: [{ k: 2, a: '4f', b: '4f', value: 84000 }, { k: 4, a: '4f', b: '4f', value: 60000 }, { k: 6, a: '4f', b: '4f', value: 43000 }], zeta: [{ shell: '4f', value: 1500 }] },
-	'4f7 5d': { F: [{ k: 2, a: '4f', b: '4f', value: 84000 }], zeta: [{ shell: '4f', value: 1500 }, { shell: '5d', value: 1000 }] }
+	'3d5': {
+		F: [
+			{ k: 2, a: '3d', b: '3d', value: 80000 },
+			{ k: 4, a: '3d', b: '3d', value: 50000 }
+		],
+		zeta: [{ shell: '3d', value: 400 }]
+	},
+	'4f3': {
+		F: [
+			{ k: 2, a: '4f', b: '4f', value: 70000 },
+			{ k: 4, a: '4f', b: '4f', value: 50000 },
+			{ k: 6, a: '4f', b: '4f', value: 36000 }
+		],
+		zeta: [{ shell: '4f', value: 880 }]
+	},
+	'4f7': {
+		F: [
+			{ k: 2, a: '4f', b: '4f', value: 84000 },
+			{ k: 4, a: '4f', b: '4f', value: 60000 },
+			{ k: 6, a: '4f', b: '4f', value: 43000 }
+		],
+		zeta: [{ shell: '4f', value: 1500 }]
+	},
+	'4f7 5d': {
+		F: [{ k: 2, a: '4f', b: '4f', value: 84000 }],
+		zeta: [
+			{ shell: '4f', value: 1500 },
+			{ shell: '5d', value: 1000 }
+		]
+	}
 };
 
 export function main(): void {
-	console.log('Energy solver: all levels with LS and jj compositions and g (medians; heap = largest heapUsed growth seen after a cold run)');
+	console.log(
+		'Energy solver: all levels with LS and jj compositions and g (medians; heap = largest heapUsed growth seen after a cold run)'
+	);
 	console.log(`Node ${process.version}\n`);
 	console.log('config     dets  block  levels   cold ms   warm ms  target ms  ratio  heap MB');
 	for (const cfg of Object.keys(PARAMS)) {
@@ -67,9 +95,23 @@ export function main(): void {
 		const a = new Float64Array(n * n);
 		for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) a[i * n + j] = a[j * n + i] = Math.sin(i * 7.1 + j * 3.3);
 		const rows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
-		const ours = median([0, 1, 2].map(() => { const t = performance.now(); symmetricEigen(a, n); return performance.now() - t; }));
-		const theirs = median([0, 1, 2].map(() => { const t = performance.now(); new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).eigenvectorMatrix; return performance.now() - t; }));
-		console.log(`n = ${String(n).padStart(4)}: ${ours.toFixed(1).padStart(8)} ms vs ml-matrix ${theirs.toFixed(1).padStart(8)} ms (ratio ${(theirs / ours).toFixed(1)}×)`);
+		const ours = median(
+			[0, 1, 2].map(() => {
+				const t = performance.now();
+				symmetricEigen(a, n);
+				return performance.now() - t;
+			})
+		);
+		const theirs = median(
+			[0, 1, 2].map(() => {
+				const t = performance.now();
+				void new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).eigenvectorMatrix;
+				return performance.now() - t;
+			})
+		);
+		console.log(
+			`n = ${String(n).padStart(4)}: ${ours.toFixed(1).padStart(8)} ms vs ml-matrix ${theirs.toFixed(1).padStart(8)} ms (ratio ${(theirs / ours).toFixed(1)}×)`
+		);
 	}
 }
 

@@ -13,5 +13,6 @@ describe('c^k(l m, l′ m′) for p–p (Condon & Shortley 1935, Table 1⁶)', (
 		expect(ck(1, 0, 1, 0, 1)).toBe(0);
 		expect(ck(1, 0, 1, 0, 4)).toBe(0);
 	});
-	it('s–p exchange: c¹(s0, p0)² = 1/3 (Condon & Shortley Table 1⁶: c¹(s, p0) = 1/√3)', () => expect(ck(0, 0, 1, 0, 1) ** 2).toBeCloseTo(1 / 3, 14));
+	it('s–p exchange: c¹(s0, p0)² = 1/3 (Condon & Shortley Table 1⁶: c¹(s, p0) = 1/√3)', () =>
+		expect(ck(0, 0, 1, 0, 1) ** 2).toBeCloseTo(1 / 3, 14));
 });

@@ -19,8 +19,12 @@ describe('determinant blocks', () => {
 		expect(b.size).toBe(determinantCounts(set.shells).byTwoMJ.get(3));
 	});
 	it('the budget check states the limit', () => {
-		expect(() => checkDeterminantBudget(parseConfiguration('4f7 5d'))).toThrow(/3106 determinants; the energy solver diagonalises at most 1200/);
-		expect(() => checkDeterminantBudget(parseConfiguration('4f7'), { maxTotal: 1000 })).toThrow(/3432 determinants; the energy solver takes at most 1000/);
+		expect(() => checkDeterminantBudget(parseConfiguration('4f7 5d'))).toThrow(
+			/3106 determinants; the energy solver diagonalises at most 1200/
+		);
+		expect(() => checkDeterminantBudget(parseConfiguration('4f7'), { maxTotal: 1000 })).toThrow(
+			/3432 determinants; the energy solver takes at most 1000/
+		);
 		expect(checkDeterminantBudget(parseConfiguration('4f7'))).toEqual({ total: 3432, block: 327 });
 	});
 });

@@ -14,13 +14,7 @@
  * one-electron l·s of each subshell (which count the electrons with j = l − ½ and j = l + ½).
  */
 import type { Configuration, Subshell } from './types';
-import {
-	centralTwoMJ,
-	checkDeterminantBudget,
-	determinantBlock,
-	orbitalSet,
-	type OrbitalSet
-} from './determinants';
+import { centralTwoMJ, checkDeterminantBudget, determinantBlock, orbitalSet, type OrbitalSet } from './determinants';
 import { parameterMatrices, type ParameterMatrices } from './hamiltonian';
 import { jSquared, lSquared, pairing, seniorityFromPairing, sSquared } from './momentum-operators';
 import { radialParameters, shellName, type RadialParameter } from './slater-parameters';

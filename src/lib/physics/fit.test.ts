@@ -62,7 +62,12 @@ describe('least-squares fit (Levenberg–Marquardt on ⟨ψ|∂H/∂P|ψ⟩)', (
 		expect(p['F4(3d,3d)'].status).toBe('linked');
 		expect(p['F4(3d,3d)'].value / p['F2(3d,3d)'].value).toBeCloseTo(truth.F4 / truth.F2, 12);
 		// without a ratio, the starting ratio is held
-		const held = fitParameters('3d2', { parameters: input(start), vary: ['Eav', 'F2(3d,3d)'], links: [{ id: 'F4(3d,3d)', to: 'F2(3d,3d)' }], observed });
+		const held = fitParameters('3d2', {
+			parameters: input(start),
+			vary: ['Eav', 'F2(3d,3d)'],
+			links: [{ id: 'F4(3d,3d)', to: 'F2(3d,3d)' }],
+			observed
+		});
 		const q = Object.fromEntries(held.parameters.map((x) => [x.id, x.value]));
 		expect(q['F4(3d,3d)'] / q['F2(3d,3d)']).toBeCloseTo(start.F4 / start.F2, 12);
 		expect(q['zeta(3d)']).toBe(start.zeta);
@@ -78,8 +83,14 @@ describe('least-squares fit (Levenberg–Marquardt on ⟨ψ|∂H/∂P|ψ⟩)', (
 
 	it('names bad ids, links and assignments', () => {
 		expect(() => fitParameters('3d2', { parameters: input(start), vary: ['F3(3d,3d)'], observed })).toThrow(/F\^3\(3d,3d\) cannot occur/);
-		expect(() => fitParameters('3d2', { parameters: input(start), vary: ['Eav'], links: [{ id: 'F4(3d,3d)', to: 'F2(3d,3d)' }], observed })).toThrow(/not varied/);
-		expect(() => fitParameters('3d2', { parameters: input(start), vary: ['Eav'], observed: [{ J: '7', energy: 0 }] })).toThrow(/no level with J = 7/);
-		expect(() => fitParameters('3d2', { parameters: input(start), vary: ['Eav'], observed: [{ J: '2', energy: 0, assign: '5D' }] })).toThrow(/has the term 5D/);
+		expect(() =>
+			fitParameters('3d2', { parameters: input(start), vary: ['Eav'], links: [{ id: 'F4(3d,3d)', to: 'F2(3d,3d)' }], observed })
+		).toThrow(/not varied/);
+		expect(() => fitParameters('3d2', { parameters: input(start), vary: ['Eav'], observed: [{ J: '7', energy: 0 }] })).toThrow(
+			/no level with J = 7/
+		);
+		expect(() =>
+			fitParameters('3d2', { parameters: input(start), vary: ['Eav'], observed: [{ J: '2', energy: 0, assign: '5D' }] })
+		).toThrow(/has the term 5D/);
 	});
 });

@@ -169,7 +169,8 @@ export function fitParameters(
 	const structure = energyStructure(all, options.limits);
 	const start = resolveParameters(structure.set, all, input.parameters);
 	const observed = input.observed ?? [];
-	if (observed.length > MAX_FIT_LEVELS) throw new RangeError(`A fit takes at most ${MAX_FIT_LEVELS} observed levels; ${observed.length} were given`);
+	if (observed.length > MAX_FIT_LEVELS)
+		throw new RangeError(`A fit takes at most ${MAX_FIT_LEVELS} observed levels; ${observed.length} were given`);
 
 	// Free, linked and fixed parameters.
 	const free: Slot[] = [];
@@ -185,7 +186,8 @@ export function fitParameters(
 		const target = slotOf(structure, all, l.to, 'link:');
 		const to = free.findIndex((f) => f.id === target.id);
 		if (to < 0) throw new RangeError(`link: ${slot.id} is linked to ${target.id}, which is not varied; add ${target.id} to vary`);
-		if (free.some((f) => f.id === slot.id)) throw new RangeError(`link: ${slot.id} is varied; a linked parameter follows another and is not varied itself`);
+		if (free.some((f) => f.id === slot.id))
+			throw new RangeError(`link: ${slot.id} is varied; a linked parameter follows another and is not varied itself`);
 		if (links.some((x) => x.slot.id === slot.id)) throw new RangeError(`link: ${slot.id} is linked twice`);
 		let ratio = l.ratio;
 		if (ratio === undefined) {
@@ -232,7 +234,8 @@ export function fitParameters(
 		const twoJ = parseHalf(String(o.J));
 		if (!Number.isFinite(o.energy)) throw new RangeError(`observed level ${i + 1}: the energy must be a finite number of cm⁻¹`);
 		const sigma = o.uncertainty ?? 1;
-		if (!Number.isFinite(sigma) || sigma <= 0) throw new RangeError(`observed level ${i + 1}: the uncertainty must be a positive number of cm⁻¹`);
+		if (!Number.isFinite(sigma) || sigma <= 0)
+			throw new RangeError(`observed level ${i + 1}: the uncertainty must be a positive number of cm⁻¹`);
 		return { ...o, twoJ, sigma };
 	});
 	const startRaw = solveRaw(structure, full(x).Eav, full(x).values);
@@ -259,17 +262,21 @@ export function fitParameters(
 		if (list.length === 0) throw new RangeError(`observed level ${i + 1}: the configuration has no level with J = ${halfString(o.twoJ)}`);
 		if (typeof o.assign === 'number') {
 			if (!Number.isInteger(o.assign) || o.assign < 1 || o.assign > list.length) {
-				throw new RangeError(`observed level ${i + 1}: assign ${o.assign} must be a rank from 1 to ${list.length} among the levels with J = ${halfString(o.twoJ)}`);
+				throw new RangeError(
+					`observed level ${i + 1}: assign ${o.assign} must be a rank from 1 to ${list.length} among the levels with J = ${halfString(o.twoJ)}`
+				);
 			}
 			const key = `${o.twoJ}:${o.assign}`;
-			if (usedRanks.has(key)) throw new RangeError(`observed level ${i + 1}: the computed level J = ${halfString(o.twoJ)} number ${o.assign} is assigned twice`);
+			if (usedRanks.has(key))
+				throw new RangeError(`observed level ${i + 1}: the computed level J = ${halfString(o.twoJ)} number ${o.assign} is assigned twice`);
 			usedRanks.add(key);
 			return { mode: 'rank', rank: o.assign };
 		}
 		if (typeof o.assign === 'string' && o.assign.trim() !== '') {
 			const classes = classesFor(o.assign);
 			const present = [...classes].some((c) => twoJInClass(o.twoJ, structure.lsClasses[c]));
-			if (!present) throw new RangeError(`observed level ${i + 1}: no computed level with J = ${halfString(o.twoJ)} has the term ${o.assign}`);
+			if (!present)
+				throw new RangeError(`observed level ${i + 1}: no computed level with J = ${halfString(o.twoJ)} has the term ${o.assign}`);
 			return { mode: 'label', classes };
 		}
 		return { mode: 'rank', rank: 0 }; // filled below
@@ -282,7 +289,8 @@ export function fitParameters(
 		const count = byJ(startRaw, o.twoJ).length;
 		let rank = 1;
 		while (rank <= count && usedRanks.has(`${o.twoJ}:${rank}`)) rank++;
-		if (rank > count) throw new RangeError(`observed level ${i + 1}: there are more observed than computed levels with J = ${halfString(o.twoJ)}`);
+		if (rank > count)
+			throw new RangeError(`observed level ${i + 1}: there are more observed than computed levels with J = ${halfString(o.twoJ)}`);
 		usedRanks.add(`${o.twoJ}:${rank}`);
 		track[i] = { mode: 'rank', rank };
 	}
@@ -318,7 +326,8 @@ export function fitParameters(
 			chosen[p.i] = { lev: p.lev, rank: p.rank };
 		}
 		obs.forEach((o, i) => {
-			if (!chosen[i]) throw new RangeError(`observed level ${i + 1}: there are more observed than computed levels with J = ${halfString(o.twoJ)}`);
+			if (!chosen[i])
+				throw new RangeError(`observed level ${i + 1}: there are more observed than computed levels with J = ${halfString(o.twoJ)}`);
 		});
 		return chosen;
 	};
@@ -411,7 +420,14 @@ export function fitParameters(
 			parameters.push({ id: s.id, value: slotValue(s), sigma: sigmaOf(f), status: 'varied', atBound: x[f] === lo[f] || x[f] === hi[f] });
 		} else if (l) {
 			const sg = sigmaOf(l.to);
-			parameters.push({ id: s.id, value: slotValue(s), sigma: sg === null ? null : Math.abs(l.ratio) * sg, status: 'linked', linkedTo: free[l.to].id, ratio: l.ratio });
+			parameters.push({
+				id: s.id,
+				value: slotValue(s),
+				sigma: sg === null ? null : Math.abs(l.ratio) * sg,
+				status: 'linked',
+				linkedTo: free[l.to].id,
+				ratio: l.ratio
+			});
 		} else parameters.push({ id: s.id, value: slotValue(s), sigma: null, status: 'fixed' });
 	}
 	const residuals = obs.map((o, i) => ({

@@ -127,7 +127,12 @@ describe('spin–orbit', () => {
 
 	it('F = G = 0 with two subshells: 2p 3d levels are sums of one-electron ζ⟨l·s⟩ (p: −ζ or ζ/2; d: −3ζ/2 or ζ)', () => {
 		const [zp, zd] = [400, 60]; // invented
-		const { levels } = intermediateLevels('2p 3d', { zeta: [{ shell: '2p', value: zp }, { shell: '3d', value: zd }] });
+		const { levels } = intermediateLevels('2p 3d', {
+			zeta: [
+				{ shell: '2p', value: zp },
+				{ shell: '3d', value: zd }
+			]
+		});
 		const allowed = [-zp - 1.5 * zd, -zp + zd, zp / 2 - 1.5 * zd, zp / 2 + zd];
 		for (const l of levels) expect(allowed.some((a) => Math.abs(a - l.energy) < CM * 1e3)).toBe(true);
 		// (2J+1)-weighted count at each energy = product of the j-group degeneracies: 2·4, 2·6, 4·4, 4·6
@@ -207,7 +212,10 @@ describe('g-factors, compositions and the trace', () => {
 	});
 
 	it('carries the model caution and names the 4f³ ground level ⁴I°₉/₂ (Hund; Dieke 1968 for Nd³⁺)', () => {
-		const r = intermediateLevels('4f3', { F: [F(2, '4f', 70000), F(4, '4f', 50000), F(6, '4f', 36000)], zeta: [{ shell: '4f', value: 880 }] });
+		const r = intermediateLevels('4f3', {
+			F: [F(2, '4f', 70000), F(4, '4f', 50000), F(6, '4f', 36000)],
+			zeta: [{ shell: '4f', value: 880 }]
+		});
 		expect(r.caution).toBe(MODEL_ENERGY_CAUTION);
 		expect(r.levels[0].label).toBe('4I°');
 		expect(r.levels[0].J).toBe('9/2');

@@ -126,8 +126,7 @@ export function lsComposition(structure: EnergyStructure, level: RawLevel): IcCo
 		const c = structure.lsClasses[cls];
 		out.push({ term: termLabel(c, { parity: structure.parity }), twoS: c.twoS, L: c.L, seniority: c.seniority, percent: 100 * w });
 	});
-	return out
-		.sort((a, b) => b.percent - a.percent);
+	return out.sort((a, b) => b.percent - a.percent);
 }
 
 /** A term's label with its seniority when the same ^{2S+1}L has more than one: "2D3" style is avoided, we write "2D (v=3)". */
@@ -167,7 +166,11 @@ export function landeFromComposition(twoJ: number, components: readonly IcCompon
  * no open subshell, a bad g_s).
  * @example intermediateLevels('2p2', { F: [{ k: 2, a: '2p', b: '2p', value: 25000 }] }).levels[0].label // '3P'
  */
-export function intermediateLevels(cfg: string | Configuration | readonly Subshell[], input: EnergyParameterInput, options: IcOptions = {}): IcResult {
+export function intermediateLevels(
+	cfg: string | Configuration | readonly Subshell[],
+	input: EnergyParameterInput,
+	options: IcOptions = {}
+): IcResult {
 	const gs = options.gs ?? 2;
 	if (!Number.isFinite(gs) || gs <= 0) throw new RangeError(`gs = ${gs} is not allowed: give a positive number such as 2 or 2.00231930436`);
 	const all = asSubshells(typeof cfg === 'string' ? parseConfiguration(cfg) : cfg);

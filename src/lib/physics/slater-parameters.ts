@@ -53,7 +53,8 @@ export function radialParameters(set: OrbitalSet): RadialParameter[] {
 	const out: RadialParameter[] = [];
 	const names = set.shells.map(shellName);
 	set.shells.forEach((s, i) => {
-		if (s.occupancy >= 2) for (let k = 2; k <= 2 * s.l; k += 2) out.push({ id: `F${k}(${names[i]},${names[i]})`, kind: 'F', k, shells: [i, i] });
+		if (s.occupancy >= 2)
+			for (let k = 2; k <= 2 * s.l; k += 2) out.push({ id: `F${k}(${names[i]},${names[i]})`, kind: 'F', k, shells: [i, i] });
 		if (s.l >= 1) out.push({ id: `zeta(${names[i]})`, kind: 'zeta', k: null, shells: [i] });
 	});
 	for (let i = 0; i < set.shells.length; i++) {
@@ -61,7 +62,8 @@ export function radialParameters(set: OrbitalSet): RadialParameter[] {
 			const a = set.shells[i];
 			const b = set.shells[j];
 			for (let k = 2; k <= 2 * Math.min(a.l, b.l); k += 2) out.push({ id: `F${k}(${names[i]},${names[j]})`, kind: 'F', k, shells: [i, j] });
-			for (let k = Math.abs(a.l - b.l); k <= a.l + b.l; k += 2) out.push({ id: `G${k}(${names[i]},${names[j]})`, kind: 'G', k, shells: [i, j] });
+			for (let k = Math.abs(a.l - b.l); k <= a.l + b.l; k += 2)
+				out.push({ id: `G${k}(${names[i]},${names[j]})`, kind: 'G', k, shells: [i, j] });
 		}
 	}
 	return out;
@@ -117,9 +119,12 @@ export function resolveParameters(set: OrbitalSet, all: readonly Subshell[], inp
 			if (i > j) [i, j] = [j, i];
 			const a = set.shells[i];
 			const b = set.shells[j];
-			if (kind === 'F' && item.k === 0) throw new RangeError(`${what}: F^0 shifts every level equally and is part of E_av; give Eav instead`);
-			if (kind === 'G' && i === j) throw new RangeError(`${what}: exchange integrals G^k join two different subshells; within ${names[i]} use F^k`);
-			if (kind === 'F' && i === j && a.occupancy < 2) throw new RangeError(`${what}: ${names[i]} holds one electron, so F^k within it does not occur`);
+			if (kind === 'F' && item.k === 0)
+				throw new RangeError(`${what}: F^0 shifts every level equally and is part of E_av; give Eav instead`);
+			if (kind === 'G' && i === j)
+				throw new RangeError(`${what}: exchange integrals G^k join two different subshells; within ${names[i]} use F^k`);
+			if (kind === 'F' && i === j && a.occupancy < 2)
+				throw new RangeError(`${what}: ${names[i]} holds one electron, so F^k within it does not occur`);
 			const lo = kind === 'F' ? 2 : Math.abs(a.l - b.l);
 			const hi = kind === 'F' ? 2 * Math.min(a.l, b.l) : a.l + b.l;
 			if (item.k < lo || item.k > hi || (item.k - lo) % 2 !== 0) {

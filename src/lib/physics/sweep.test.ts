@@ -17,8 +17,12 @@ describe('LS → jj sweep', () => {
 		for (const c of sweep.curves) expect(c.energies).toHaveLength(61);
 	});
 	it('starts at the pure LS energies (ζ = 0) and ends at the pure jj energies (F = 0), Condon & Shortley p² values', () => {
-		const ls = intermediateLevels('2p2', { F: params.F }).levels.map((l) => l.energy).sort((a, b) => a - b);
-		const jj = intermediateLevels('2p2', { zeta: params.zeta }).levels.map((l) => l.energy).sort((a, b) => a - b);
+		const ls = intermediateLevels('2p2', { F: params.F })
+			.levels.map((l) => l.energy)
+			.sort((a, b) => a - b);
+		const jj = intermediateLevels('2p2', { zeta: params.zeta })
+			.levels.map((l) => l.energy)
+			.sort((a, b) => a - b);
 		const first = sweep.curves.map((c) => c.energies[0]).sort((a, b) => a - b);
 		const last = sweep.curves.map((c) => c.energies[60]).sort((a, b) => a - b);
 		first.forEach((e, i) => expect(e).toBeCloseTo(ls[i], 6));

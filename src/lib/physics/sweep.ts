@@ -50,7 +50,9 @@ export function couplingSweep(
 ): SweepResult {
 	const points = options.points ?? SWEEP_POINTS.default;
 	if (!Number.isInteger(points) || points < SWEEP_POINTS.min || points > SWEEP_POINTS.max) {
-		throw new RangeError(`points = ${points} is not allowed: a sweep takes an integer from ${SWEEP_POINTS.min} to ${SWEEP_POINTS.max} points`);
+		throw new RangeError(
+			`points = ${points} is not allowed: a sweep takes an integer from ${SWEEP_POINTS.min} to ${SWEEP_POINTS.max} points`
+		);
 	}
 	const all = asSubshells(typeof cfg === 'string' ? parseConfiguration(cfg) : cfg);
 	const structure = energyStructure(all, options.limits);

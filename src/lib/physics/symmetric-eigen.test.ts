@@ -23,27 +23,31 @@ describe('symmetricEigen (Householder + QL, Wilkinson & Reinsch 1971)', () => {
 
 	it('property: A v = λ v, orthonormal vectors, and the same eigenvalues as ml-matrix (fast-check)', () => {
 		fc.assert(
-			fc.property(fc.integer({ min: 1, max: 12 }), fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: 78, maxLength: 78 }), (n, pool) => {
-				const a = new Float64Array(n * n);
-				let k = 0;
-				for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) a[i * n + j] = a[j * n + i] = pool[k++];
-				const e = symmetricEigen(a, n);
-				for (let r = 0; r < n; r++) {
-					for (let i = 0; i < n; i++) {
-						let s = 0;
-						for (let j = 0; j < n; j++) s += a[i * n + j] * e.vectors[r * n + j];
-						expect(Math.abs(s - e.values[r] * e.vectors[r * n + i])).toBeLessThan(RESIDUAL * 100 * n);
+			fc.property(
+				fc.integer({ min: 1, max: 12 }),
+				fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: 78, maxLength: 78 }),
+				(n, pool) => {
+					const a = new Float64Array(n * n);
+					let k = 0;
+					for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) a[i * n + j] = a[j * n + i] = pool[k++];
+					const e = symmetricEigen(a, n);
+					for (let r = 0; r < n; r++) {
+						for (let i = 0; i < n; i++) {
+							let s = 0;
+							for (let j = 0; j < n; j++) s += a[i * n + j] * e.vectors[r * n + j];
+							expect(Math.abs(s - e.values[r] * e.vectors[r * n + i])).toBeLessThan(RESIDUAL * 100 * n);
+						}
+						for (let q = 0; q < n; q++) {
+							let dot = 0;
+							for (let i = 0; i < n; i++) dot += e.vectors[r * n + i] * e.vectors[q * n + i];
+							expect(dot).toBeCloseTo(r === q ? 1 : 0, 9);
+						}
 					}
-					for (let q = 0; q < n; q++) {
-						let dot = 0;
-						for (let i = 0; i < n; i++) dot += e.vectors[r * n + i] * e.vectors[q * n + i];
-						expect(dot).toBeCloseTo(r === q ? 1 : 0, 9);
-					}
+					const rows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
+					const ref = [...new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).realEigenvalues].sort((x, y) => x - y);
+					ref.forEach((v, i) => expect(e.values[i]).toBeCloseTo(v, 8));
 				}
-				const rows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
-				const ref = [...new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).realEigenvalues].sort((x, y) => x - y);
-				ref.forEach((v, i) => expect(e.values[i]).toBeCloseTo(v, 8));
-			}),
+			),
 			{ numRuns: 40 }
 		);
 	});

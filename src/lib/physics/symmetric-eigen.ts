@@ -23,8 +23,10 @@ const EPS = 2 ** -52;
  * @example symmetricEigen(Float64Array.from([2, 1, 1, 2]), 2).values // Float64Array [1, 3]
  */
 export function symmetricEigen(a: Float64Array, n: number): SymmetricEigen {
-	if (!Number.isInteger(n) || n < 0 || a.length !== n * n) throw new RangeError(`symmetricEigen needs an n×n matrix: got ${a.length} entries for n = ${n}`);
-	for (let i = 0; i < a.length; i++) if (!Number.isFinite(a[i])) throw new RangeError('symmetricEigen: the matrix holds a non-finite number');
+	if (!Number.isInteger(n) || n < 0 || a.length !== n * n)
+		throw new RangeError(`symmetricEigen needs an n×n matrix: got ${a.length} entries for n = ${n}`);
+	for (let i = 0; i < a.length; i++)
+		if (!Number.isFinite(a[i])) throw new RangeError('symmetricEigen: the matrix holds a non-finite number');
 	if (n === 0) return { n, values: new Float64Array(0), vectors: new Float64Array(0) };
 	// Scale to entries of order 1 so that tiny (denormal) or huge matrices neither underflow nor overflow.
 	let scale = 0;
