@@ -27,6 +27,7 @@ export { termDisplay, levelDisplay } from './display';
 export { parentageOf, onTypedParents, MAX_PARENTAGE_OCCURRENCES, type ParentagePath } from './parentage';
 export { listMicrostates, iterateMicrostates } from './listing';
 export { termsByEnumeration } from './enumerate';
+export { jkLevels, jkSplit, jkLevelCountsByJ, JkNotApplicable, MAX_JK_LEVELS, type JkLevel } from './jk';
 export { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from './jj';
 export {
 	wigner3j,
@@ -43,3 +44,40 @@ export { exactToNumber, exactString, exactSquaredString, exactJson, type ExactSq
 export { couplingTable, MAX_J_COUPLING_TABLE } from './basis';
 export { couplingBridge, jjSpinOrbitWeight } from './bridge';
 export { termSheet, type TermSheet } from './report';
+export {
+	airRefractiveIndex,
+	vacuumToAir,
+	airToVacuum,
+	toVacuumAngstrom,
+	fromVacuumAngstrom,
+	wavenumberOf,
+	vacuumWavelengthOf,
+	listedWavelength,
+	uncertaintyToWavenumber,
+	AIR_WAVELENGTH_LIMIT_A,
+	type SpectralUnit,
+	type Medium
+} from './airvac';
+export { ritzLine, ritzUncertainty, type RitzLine } from './ritz';
+export {
+	jParityAllows,
+	lsVerdict,
+	lsLineStrength,
+	multipletLines,
+	multipletLabel,
+	termSymbol,
+	transitionsBetween,
+	TRANSITION_TYPES,
+	type TransitionType,
+	type SpectralLevel,
+	type Transition
+} from './transitions';
+export {
+	matchLines,
+	matchLinesBruteForce,
+	transitionTable,
+	MAX_MATCH_LEVELS,
+	MAX_MATCH_LINES,
+	MAX_MATCH_TRANSITIONS,
+	type MatchResult
+} from './matcher';
