@@ -13,6 +13,7 @@ export const GET: RequestHandler = () =>
 			'GET|POST /api/v1/projects',
 			'GET|PATCH|DELETE /api/v1/projects/:projectId',
 			'GET|POST /api/v1/projects/:projectId/members',
+			'GET|DELETE /api/v1/projects/:projectId/membership',
 			'GET|POST /api/v1/projects/:projectId/shelf',
 			'GET|PATCH|DELETE /api/v1/projects/:projectId/shelf/:entryId'
 		]

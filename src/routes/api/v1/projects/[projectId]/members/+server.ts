@@ -7,5 +7,6 @@ export const GET: RequestHandler = api((event) => json({ members: listMembers(ap
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return json({ member: addMember(actor, event.params.projectId, await readJson(event)) }, { status: 201 });
+	// 202: the same answer whether or not an account uses the e-mail (no account discovery).
+	return json({ result: addMember(actor, event.params.projectId, await readJson(event)) }, { status: 202 });
 });

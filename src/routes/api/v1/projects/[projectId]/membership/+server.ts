@@ -1,0 +1,12 @@
+import { json } from '@sveltejs/kit';
+import type { RequestHandler } from './$types';
+import { getProject, leaveProject } from '$lib/server/services/projects';
+import { api, apiActor } from '$lib/server/http';
+
+/** Your own membership: GET shows your role, DELETE leaves the project. */
+export const GET: RequestHandler = api((event) => json({ membership: { role: getProject(apiActor(event), event.params.projectId).role } }));
+
+export const DELETE: RequestHandler = api((event) => {
+	leaveProject(apiActor(event), event.params.projectId);
+	return new Response(null, { status: 204 });
+});
