@@ -48,7 +48,7 @@ export function csvSafeCell(value: string | number | null): string | number {
 /** CSV (RFC 4180 through papaparse) with every text cell neutralised by `csvSafeCell`. */
 export function toCsv<R>(rows: readonly R[], columns: readonly Column<R>[]): string {
 	return Papa.unparse({
-		fields: columns.map((c) => csvSafeCell(c.key)),
+		fields: columns.map((c) => String(csvSafeCell(c.key))),
 		data: rows.map((r) => columns.map((c) => csvSafeCell(c.value(r))))
 	});
 }

@@ -31,7 +31,7 @@ export const actions: Actions = {
 		const form = await event.request.formData();
 		const result = await forAction(() => removeMember(user, event.params.projectId, String(form.get('userId') ?? '')));
 		return result.ok ? { removed: true } : result.failure;
-	}
+	},
 	leave: async (event) => {
 		const user = requireUser(event);
 		const result = await forAction(() => leaveProject(user, event.params.projectId));
