@@ -120,3 +120,40 @@ describe('reset requests are limited', () => {
 		);
 	});
 });
+
+describe('the outbox view', () => {
+	it('is on only in development or with MAIL_OUTBOX=on, and never with SMTP_URL', async () => {
+		const { outboxViewIsOn } = await import('./mail');
+		expect(outboxViewIsOn({}, false)).toBe(false);
+		expect(outboxViewIsOn({}, true)).toBe(true);
+		expect(outboxViewIsOn({ MAIL_OUTBOX: 'on' }, false)).toBe(true);
+		expect(outboxViewIsOn({ MAIL_OUTBOX: 'off' }, true)).toBe(false);
+		expect(outboxViewIsOn({ MAIL_OUTBOX: 'on', SMTP_URL: 'smtp://mail.example:25' }, true)).toBe(false);
+	});
+
+	it('masks a live reset link and shows it once it is spent; only site admins read it; off means 404', async () => {
+		const { outboxForAdmin } = await import('./services/outbox');
+		const { ServiceError } = await import('./errors');
+		const { db } = await import('./db');
+		const { users } = await import('./db/schema');
+		const { eq } = await import('drizzle-orm');
+		const admin = db.select().from(users).where(eq(users.siteRole, 'admin')).get()!;
+		const adminActor = { id: admin.id, email: admin.email, name: admin.name, siteRole: admin.siteRole };
+		const member = await signUp({ name: 'Mailbox Owner', email: 'mailbox@example.org', password: 'first-password' });
+		await requestPasswordReset('mailbox@example.org', 'http://localhost', '203.0.113.99');
+		const token = linkIn(capturedMail()[0].body)!;
+		process.env.MAIL_OUTBOX = 'on';
+		try {
+			expect(() => outboxForAdmin(member)).toThrow(ServiceError);
+			const [shown] = outboxForAdmin(adminActor);
+			expect(shown.body).not.toContain(token);
+			expect(shown.body).toContain(`/reset/${token.slice(0, 4)}…[hidden`);
+			await resetPassword(token, 'second-password');
+			expect(outboxForAdmin(adminActor)[0].body).toContain(`/reset/${token}`);
+			process.env.MAIL_OUTBOX = 'off';
+			expect(() => outboxForAdmin(adminActor)).toThrow(/outbox view is off/);
+		} finally {
+			delete process.env.MAIL_OUTBOX;
+		}
+	});
+});
