@@ -1,11 +1,4 @@
-/** The JSON of `/api/v1/bridge` as the Coupling bridge reads it. */
-export interface BridgeResponse {
-	configuration: { notation: string; pretty: string; parity: 'even' | 'odd' };
-	schematic: boolean;
-	ls: { label: string; J: string }[];
-	jj: { label: string; J: string; group: string; subshells: string; spinOrbitWeight: number }[];
-	links: { J: string; ls: number; jj: number }[];
-}
+import type { BridgeResponse } from '$lib/api/types';
 
 /** The Coupling bridge draws at most this many levels per side; beyond it, a message and the table. */
 export const MAX_BRIDGE_LEVELS = 200;

@@ -1,12 +1,17 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { addMember, listMembers } from '$lib/server/services/projects';
-import { api, apiActor, readJson } from '$lib/server/http';
+import { api, apiActor, readJson, reply } from '$lib/server/http';
 
-export const GET: RequestHandler = api((event) => json({ members: listMembers(apiActor(event), event.params.projectId) }));
+export const GET: RequestHandler = api((event) =>
+	reply('GET /api/v1/projects/:projectId/members', { members: listMembers(apiActor(event), event.params.projectId) })
+);
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
 	// 202: the same answer whether or not an account uses the e-mail (no account discovery).
-	return json({ result: addMember(actor, event.params.projectId, await readJson(event)) }, { status: 202 });
+	return reply(
+		'POST /api/v1/projects/:projectId/members',
+		{ result: addMember(actor, event.params.projectId, await readJson(event)) },
+		{ status: 202 }
+	);
 });

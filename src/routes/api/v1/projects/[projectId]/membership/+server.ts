@@ -1,10 +1,11 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { getProject, leaveProject } from '$lib/server/services/projects';
-import { api, apiActor } from '$lib/server/http';
+import { api, apiActor, reply } from '$lib/server/http';
 
-/** Your own membership: GET shows your role, DELETE leaves the project. */
-export const GET: RequestHandler = api((event) => json({ membership: { role: getProject(apiActor(event), event.params.projectId).role } }));
+/** Your own membership: GET shows your role, DELETE leaves the project (not as its last owner). */
+export const GET: RequestHandler = api((event) =>
+	reply('GET /api/v1/projects/:projectId/membership', { membership: { role: getProject(apiActor(event), event.params.projectId).role } })
+);
 
 export const DELETE: RequestHandler = api((event) => {
 	leaveProject(apiActor(event), event.params.projectId);

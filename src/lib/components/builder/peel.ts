@@ -5,7 +5,7 @@
  * their blocks of ones are subtracted from the counts for display.
  */
 import type { TermSheet } from '$lib/physics/report';
-import { halfValue, termKey } from './sheetRows.svelte';
+import { halfValue, termKey } from './sheetRows';
 
 export interface PeelTerm {
 	/** "4F" */
