@@ -129,3 +129,45 @@ test('GET /api/v1/jj refuses to list over 20000 levels and counts them by J inst
 	}, 0);
 	expect(states).toBe(926640);
 });
+
+test.describe('labels: parentage and jK', () => {
+	test('GET /api/v1/terms?config=3d6 4s gives each term its parentage and a display label', async ({ request }) => {
+		// Fe II a⁶D 3d⁶(⁵D)4s (NIST ASD, from memory); 24 term occurrences (d⁶ terms × s, Condon & Shortley 1935).
+		const body = await (await request.get('/api/v1/terms?config=' + encodeURIComponent('3d6 4s'))).json();
+		const sextet = body.terms.find((t: { label: string }) => t.label === '6D');
+		expect(sextet.display).toBe('⁶D');
+		expect(sextet.parentage[0]).toEqual({
+			parents: [
+				{ subshell: '3d6', S: '2', L: 2, seniority: 4 },
+				{ subshell: '4s', S: '1/2', L: 0, seniority: 1 }
+			],
+			intermediates: [
+				{ S: '2', L: 2 },
+				{ S: '5/2', L: 2 }
+			],
+			label: '3d⁶(⁵D)4s ⁶D'
+		});
+		expect(body.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
+		expect(body.hund.phrase).toBe("lowest level by Hund's rules (heuristic)");
+	});
+
+	test('GET /api/v1/jk?config=2p5 3p lists ten levels starting on the ²P°₃/₂ core', async ({ request }) => {
+		// Cowan (1981) sec. 4.12, 2p⁵3p in pair coupling (from memory).
+		const res = await request.get('/api/v1/jk?config=' + encodeURIComponent('2p5 3p'));
+		expect(res.status()).toBe(200);
+		const body = await res.json();
+		expect(body.levels).toHaveLength(10);
+		expect(body.levels).toContainEqual({
+			core: { S: '1/2', L: 1, J: '3/2', occurrence: 1, parentage: '2p⁵ ²P°' },
+			K: '5/2',
+			J: '3',
+			label: '2p⁵(²P°₃/₂)3p ²[5/2]₃'
+		});
+	});
+
+	test('GET /api/v1/jk answers 400 with the reason where jK does not apply', async ({ request }) => {
+		const res = await request.get('/api/v1/jk?config=2p2');
+		expect(res.status()).toBe(400);
+		expect((await res.json()).error.message).toMatch(/jK coupling needs one outer electron/);
+	});
+});
