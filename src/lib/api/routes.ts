@@ -30,6 +30,15 @@ const LISTED: Listed = {
 	'GET /api/v1/wigner': { summary: 'Wigner 3j/6j/9j or Clebsch–Gordan: ?symbol=6j&args=1,1,1,1,1,1', access: 'public' },
 	'GET /api/v1/species': { summary: 'ground configuration of an atom or ion: ?name=Fe II', access: 'public' },
 	'GET /api/v1/microstates': { summary: 'explicit microstates, a page at a time: ?config=2p2&offset=0&limit=50', access: 'public' },
+	'GET /api/v1/transitions': {
+		summary: 'Transition finder: multiplets and LS strengths: ?lower=2p2&upper=2p 3s&types=E1,M1,E2',
+		access: 'public'
+	},
+	'GET /api/v1/airvac': {
+		summary: 'standard air ↔ vacuum wavelength (Morton 2000): ?vacuum=6564.61 or ?air=6562.80 (Å)',
+		access: 'public'
+	},
+	'POST /api/v1/match': { summary: 'Line matcher: { levels, lines, tolerance?, types? } → ranked candidates per line', access: 'public' },
 	'GET /api/v1/projects': { summary: 'your projects', access: 'signed-in' },
 	'POST /api/v1/projects': { summary: 'create a project { name, description }', access: 'signed-in' },
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
