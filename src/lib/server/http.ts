@@ -75,9 +75,19 @@ export function api<E extends RequestEvent>(handler: (event: E) => Response | Pr
 			// The engine reports bad input with these; each message says what is allowed.
 			if (e instanceof InputError) return jsonError(400, e.message, { token: e.token });
 			if (e instanceof RangeError) return jsonError(400, e.message);
+			// SvelteKit's own request errors (a body over BODY_SIZE_LIMIT is a 413) carry a safe status and message.
+			if (isKitRequestError(e)) return jsonError(e.status, e.message);
+			// Anything else is unexpected: handleError logs it with an id and the handle hook answers in the shape.
 			throw e;
 		}
 	};
+}
+
+/** SvelteKit's internal `SvelteKitError` (not exported): an Error with a 4xx status, e.g. 413 Payload Too Large. */
+function isKitRequestError(e: unknown): e is Error & { status: number } {
+	if (!(e instanceof Error) || e.name === 'ServiceError') return false;
+	const status: unknown = (e as unknown as { status?: unknown }).status;
+	return typeof status === 'number' && status >= 400 && status < 500;
 }
 
 /** The API's actor: a personal API token (`Authorization: Bearer tw_…`) or the cookie session. */
