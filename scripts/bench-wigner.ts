@@ -2,7 +2,8 @@
  * Rough timings of the exact Wigner symbols at the API size limits and of jj level listing.
  * Run with `npx tsx scripts/bench-wigner.ts`. Not a test: numbers depend on the machine.
  */
-import { evaluateSymbol, MAX_J_9J, MAX_J_SYMBOL } from '../src/lib/physics/wigner';
+import { MAX_J_9J, MAX_J_SYMBOL } from '../src/lib/physics/wigner';
+import { evaluateSymbol } from '../src/lib/server/compute/symbol-args';
 import { jjLevelCountsByJ, jjLevels } from '../src/lib/physics/jj';
 import { parseConfiguration } from '../src/lib/physics/parse';
 

@@ -1,3 +1,4 @@
+import { parseConfiguration } from '../physics/parse';
 import { describe, expect, it } from 'vitest';
 import { csvSafeCell, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
 import { levelColumns, levelRows } from './term-sheet';
@@ -70,7 +71,7 @@ describe('exports', () => {
 
 	it('the Term sheet export of 3d5 4s has one row per J of each term and the ⁷S₃ row with g = 2', () => {
 		// ⁷S₃: g = 2 exactly for L = 0 (Landé formula). Repeated terms keep one row with their count.
-		const sheet = termSheet('3d5 4s');
+		const sheet = termSheet(parseConfiguration('3d5 4s'));
 		const rows = levelRows(sheet);
 		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + t.levels.length, 0));
 		const csv = toCsv(rows, levelColumns);
