@@ -4,7 +4,7 @@
  * it and hand back one string (no large object crosses threads, and no JSON is written on the
  * request thread). The same functions run inline for light requests: `light(args)` says, from a
  * closed-form estimate, whether a task is cheap enough (well under ~50 ms) to run on the
- * request thread. Engine errors that mean bad input (ConfigurationError, SpeciesError,
+ * request thread. Engine errors that mean bad input (InputError such as ConfigurationError,
  * RangeError, including the engine's BudgetError) become a 400 in the API's error shape.
  *
  * This module may import only the engine and plain packages: it is bundled for the worker
@@ -22,8 +22,7 @@ import { exactJson } from '../../physics/exact';
 import { evaluateSymbol, type SymbolKind } from '../../physics/wigner';
 import { gridExtent, gridWork, seniorityWork, sheetLevelRowsBound } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
-import { ConfigurationError } from '../../physics/parse';
-import { SpeciesError } from '../../physics/elements';
+import { InputError } from '../../physics/input-error';
 
 /** A finished answer: HTTP status and the JSON body as text. */
 export interface TaskResult {
@@ -176,8 +175,7 @@ export function runTask<N extends TaskName>(name: N, args: TaskArgs<N>): TaskRes
 	try {
 		return { status: 200, body: JSON.stringify(task.run(args)) };
 	} catch (e) {
-		if (e instanceof ConfigurationError || e instanceof SpeciesError)
-			return { status: 400, body: errorBody(e.message, { token: e.token }) };
+		if (e instanceof InputError) return { status: 400, body: errorBody(e.message, { token: e.token }) };
 		if (e instanceof RangeError) return { status: 400, body: errorBody(e.message) };
 		throw e;
 	}
