@@ -45,7 +45,12 @@ const LISTED: Listed = {
 	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },
 	'GET /api/v1/projects/:projectId/members': { summary: 'members and their roles', access: 'viewer' },
-	'POST /api/v1/projects/:projectId/members': { summary: 'add a member { email, role }', access: 'owner' },
+	'POST /api/v1/projects/:projectId/members': {
+		summary: 'add a member { email, role }; the answer is the same whether or not an account uses the e-mail',
+		access: 'owner'
+	},
+	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },
+	'DELETE /api/v1/projects/:projectId/membership': { summary: 'leave the project (not the last owner)', access: 'viewer' },
 	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf', access: 'viewer' },
 	'POST /api/v1/projects/:projectId/shelf': { summary: 'add a configuration to the Shelf', access: 'editor' },
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { summary: 'one Shelf entry', access: 'viewer' },

@@ -194,7 +194,10 @@ export interface ApiResponses {
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
 	'DELETE /api/v1/projects/:projectId': null;
 	'GET /api/v1/projects/:projectId/members': { members: MemberJson[] };
-	'POST /api/v1/projects/:projectId/members': { member: MemberJson };
+	/** The same answer whether or not an account uses the e-mail (no account discovery). */
+	'POST /api/v1/projects/:projectId/members': { result: { email: string; role: ProjectRoleName; message: string } };
+	'GET /api/v1/projects/:projectId/membership': { membership: { role: ProjectRoleName } };
+	'DELETE /api/v1/projects/:projectId/membership': null;
 	'GET /api/v1/projects/:projectId/shelf': { entries: ShelfEntryJson[] };
 	'POST /api/v1/projects/:projectId/shelf': { entry: ShelfEntryJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };
