@@ -2,6 +2,10 @@ import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
 
+// Unit tests never touch a database file: each test file opens its own in-memory database. Set here,
+// before SvelteKit reads the environment, because $env/dynamic/private is fixed when Vitest starts.
+if (process.env.VITEST) process.env.DATABASE_PATH = ':memory:';
+
 export default defineConfig({
 	plugins: [tailwindcss(), sveltekit()],
 	test: {
@@ -14,9 +18,7 @@ export default defineConfig({
 					name: 'server',
 					include: ['src/**/*.test.ts'],
 					exclude: ['src/**/*.svelte.test.ts'],
-					environment: 'node',
-					// Each test file gets its own private in-memory database.
-					env: { DATABASE_PATH: ':memory:' }
+					environment: 'node'
 				}
 			},
 			{

@@ -33,7 +33,7 @@ describe('exports', () => {
 		// ⁷S₃: g = 2 exactly for L = 0 (Landé formula); Cr I ground 3d⁵(⁶S)4s ⁷S₃ (NIST ASD, from memory).
 		const sheet = termSheet('3d5 4s');
 		const rows = levelRows(sheet);
-		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + t.count * t.levels.length, 0));
+		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + Number(t.count) * t.levels.length, 0));
 		const csv = toCsv(rows, levelColumns);
 		expect(csv.split('\r\n')[0]).toBe('term,occurrence,parentage,count,seniority,S,L,parity,J,g,g_decimal,weight');
 		expect(csv).toContain('7S,1,3d⁵(⁶S)4s ⁷S,1,,3,0,even,3,2,2,7');

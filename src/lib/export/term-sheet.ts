@@ -11,7 +11,8 @@ export interface LevelRow {
 	letter: string;
 	S: string;
 	L: number;
-	count: number;
+	/** How often the term occurs, exact decimal digits. */
+	count: string;
 	seniority: string;
 	parity: 'even' | 'odd';
 	J: string;
@@ -25,11 +26,19 @@ export interface LevelRow {
 	parentage: string;
 }
 
+/**
+ * Seniorities as people read them: "1, 3" for two occurrences with v = 1 and v = 3, and a count
+ * where several occurrences share one v: "1, 3 (2×)".
+ */
+export function senioritySummary(list: readonly { seniority: number; count: string }[]): string {
+	return list.map((s) => (s.count === '1' ? String(s.seniority) : `${s.seniority} (${s.count}×)`)).join(', ');
+}
+
 export function levelRows(sheet: TermSheet): LevelRow[] {
 	return sheet.terms.flatMap((t) => {
 		const items = t.parentage ?? null;
 		const single = sheet.configuration.subshells.filter((s) => s.open).length === 1;
-		const all = t.seniorities ? t.seniorities.join(',') : '';
+		const all = t.seniorities ? senioritySummary(t.seniorities) : '';
 		const occurrences: Occurrence[] = items
 			? items.map((p, k) => ({
 					occurrence: k + 1,

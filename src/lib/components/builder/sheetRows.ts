@@ -33,7 +33,7 @@ export const groupOf = (r: LevelRow) => `${r.key}#${r.occurrence ?? 0}`;
 /** Whether the sheet shows one row group per occurrence. */
 export function showsOccurrences(sheet: TermSheet): boolean {
 	if (!sheet.parentageStatus?.listed) return false;
-	return sheet.terms.reduce((n, t) => n + t.count * t.levels.length, 0) <= MAX_OCCURRENCE_ROWS;
+	return sheet.terms.reduce((n, t) => n + Number(t.count) * t.levels.length, 0) <= MAX_OCCURRENCE_ROWS;
 }
 
 /** True when the user typed parent terms: the engine then marks each occurrence built on them. */
@@ -67,7 +67,7 @@ export function levelRowsOf(sheet: TermSheet): LevelRow[] {
 			}));
 		if (!split) return rowsOf(null, null);
 		const items = term.parentage ?? [];
-		return Array.from({ length: term.count }, (_, k) => rowsOf(k + 1, items[k] ?? null)).flat();
+		return Array.from({ length: Number(term.count) }, (_, k) => rowsOf(k + 1, items[k] ?? null)).flat();
 	});
 }
 
@@ -111,14 +111,21 @@ export const SHEET_COLUMNS: SheetColumn[] = [
 		parentOnly: true,
 		sortValue: (r) => [r.parentage?.parent ?? '']
 	},
-	{ id: 'count', label: 'Count', title: 'How often the term occurs', numeric: true, termColumn: true, sortValue: (r) => [r.term.count] },
+	{
+		id: 'count',
+		label: 'Count',
+		title: 'How often the term occurs',
+		numeric: true,
+		termColumn: true,
+		sortValue: (r) => [Number(r.term.count)]
+	},
 	{
 		id: 'v',
 		label: 'v',
-		title: 'Seniority (Racah), one per occurrence; single open subshell only',
+		title: 'Seniority (Racah) of the occurrences, with a count where several share one; single open subshell only',
 		numeric: true,
 		termColumn: true,
-		sortValue: (r) => [r.term.seniorities?.[0] ?? -1]
+		sortValue: (r) => [r.term.seniorities?.[0]?.seniority ?? -1]
 	},
 	{ id: 'S', label: 'S', title: 'Total spin', numeric: true, termColumn: true, sortValue: (r) => [halfValue(r.term.S)] },
 	{ id: 'L', label: 'L', title: 'Total orbital angular momentum', numeric: true, termColumn: true, sortValue: (r) => [r.term.L] },
