@@ -156,7 +156,8 @@ test.describe('labels: parentage and jK', () => {
 				{ S: '2', L: 2 },
 				{ S: '5/2', L: 2 }
 			],
-			label: '3d⁶(⁵D)4s ⁶D'
+			label: '3d⁶(⁵D)4s ⁶D',
+			parent: '3d⁶(⁵D)4s'
 		});
 		expect(body.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
 		expect(body.hund.phrase).toBe("lowest level by Hund's rules (heuristic)");
