@@ -22,12 +22,21 @@ import {
 	type Rational
 } from './exact';
 import { halfString, parseHalf } from './half';
+import { BudgetError } from './budget';
 
 // ---------------------------------------------------------------- validation
 
+/**
+ * Work budget of the exact symbols: every j is at most MAX_J_SYMBOL (9j: MAX_J_9J), checked
+ * before any factorial is formed (the BigInt factorials grow with j; see ./budget.ts).
+ */
 function checkJ(where: string, name: string, tj: number): void {
 	if (!Number.isInteger(tj) || tj < 0) {
 		throw new RangeError(`${where}: ${name} must be given as twice its value, a non-negative integer (j = 0, 1/2, 1, …), got ${tj}`);
+	}
+	const max = where === 'wigner9j' ? MAX_J_9J : MAX_J_SYMBOL;
+	if (tj > 2 * max) {
+		throw new BudgetError(`${where}: ${name} = ${halfString(tj)} is over the limit of j = ${max} for exact evaluation`, tj / 2, max);
 	}
 }
 
@@ -295,18 +304,8 @@ export function wigner6jFloat(tj1: number, tj2: number, tj3: number, tj4: number
 }
 
 /** `wigner9j` as a double. Throws as `wigner9j`. @example wigner9jFloat(1, 1, 2, 1, 1, 2, 2, 2, 4) // 0.1111111111111111 */
-export function wigner9jFloat(
-	tj1: number,
-	tj2: number,
-	tj3: number,
-	tj4: number,
-	tj5: number,
-	tj6: number,
-	tj7: number,
-	tj8: number,
-	tj9: number
-): number {
-	return exactToNumber(wigner9j(tj1, tj2, tj3, tj4, tj5, tj6, tj7, tj8, tj9));
+export function wigner9jFloat(...args: Parameters<typeof wigner9j>): number {
+	return exactToNumber(wigner9j(...args));
 }
 
 // ------------------------------------------------------------- API helper

@@ -6,8 +6,7 @@ import { ZodError } from 'zod';
 import type { Actor } from './access';
 import { ServiceError } from './errors';
 import { actorForToken } from './services/tokens';
-import { ConfigurationError } from '../physics/parse';
-import { SpeciesError } from '../physics/elements';
+import { InputError } from '../physics/input-error';
 import type { ApiResponses, RouteKey, Sendable } from '../api/types';
 
 /** The signed-in user, or a redirect to the sign-in page that comes back here. */
@@ -74,7 +73,7 @@ export function api<E extends RequestEvent>(handler: (event: E) => Response | Pr
 			if (e instanceof ServiceError) return jsonError(e.status, e.message, e.details);
 			if (e instanceof ZodError) return jsonError(400, e.issues[0]?.message ?? 'Bad input');
 			// The engine reports bad input with these; each message says what is allowed.
-			if (e instanceof ConfigurationError || e instanceof SpeciesError) return jsonError(400, e.message, { token: e.token });
+			if (e instanceof InputError) return jsonError(400, e.message, { token: e.token });
 			if (e instanceof RangeError) return jsonError(400, e.message);
 			// SvelteKit's own request errors (a body over BODY_SIZE_LIMIT is a 413) carry a safe status and message.
 			if (isKitRequestError(e)) return jsonError(e.status, e.message);
