@@ -36,6 +36,7 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /': 'public',
 	'PAGE /builder': 'public',
 	'PAGE /basis': 'public',
+	'PAGE /transitions': 'public',
 	'PAGE /signin': 'public',
 	'ACTION /signin ?/default': 'public',
 	'PAGE /signup': 'public',
