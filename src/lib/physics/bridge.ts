@@ -111,7 +111,8 @@ const byJ = (list: { twoJ: number }[]) => {
 /**
  * Correlates LS, jK (where it applies) and jj levels of equal J by the non-crossing rule (see the
  * module comment). `zeta` overrides the default ζ of some open subshells (./bridge.ts `defaultZeta`).
- * Throws what jjLevels and jkLevels throw (too many levels), ConfigurationError for bad input,
+ * Throws what jjLevels (over MAX_JJ_LEVELS levels, checked before any list is built) and jkLevels
+ * throw, ConfigurationError for bad input,
  * RangeError for a ζ that is not a positive finite number or names a subshell that is not open,
  * and an Error when the J counts of two sides differ (which would be a bug).
  * @example couplingBridge(parseConfiguration('2p 3p')).links.length // 10
@@ -128,6 +129,9 @@ export function couplingBridge(input: Configuration | readonly Subshell[], zeta:
 	}
 	const zetaOf = (n: number, l: number) => zetas.find((x) => x.n === n && x.l === l)?.zeta ?? 1;
 
+	// jjLevels checks its output budget (MAX_JJ_LEVELS) before listing; the LS side has as many
+	// levels, so it is built only after that check.
+	const jjList = jjLevels(subshells);
 	const ls: BridgeLsLevel[] = [];
 	for (const t of hundOrder(subshells)) {
 		for (let k = 1; k <= t.term.count; k++) {
@@ -136,7 +140,7 @@ export function couplingBridge(input: Configuration | readonly Subshell[], zeta:
 			}
 		}
 	}
-	const jj: BridgeJjLevel[] = jjLevels(subshells)
+	const jj: BridgeJjLevel[] = jjList
 		.map((level) => ({ label: level.label, twoJ: level.twoJ, spinOrbitWeight: jjSpinOrbitWeight(level, zetaOf), level }))
 		.sort((a, b) => a.spinOrbitWeight - b.spinOrbitWeight || a.twoJ - b.twoJ);
 
