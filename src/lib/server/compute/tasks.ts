@@ -20,7 +20,7 @@ import { couplingBridge, parseZetaList, ZETA_SOURCE } from '../../physics/bridge
 import { lLetter } from '../../physics/letters';
 import { couplingTable } from '../../physics/basis';
 import { exactJson } from '../../physics/exact';
-import { evaluateSymbol, type SymbolKind } from '../../physics/wigner';
+import { evaluateSymbol, type SymbolKind } from './symbol-args';
 import { gridExtent, gridWork, seniorityWork, sheetLevelRowsBound } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
 import { InputError } from '../../physics/input-error';
@@ -63,7 +63,7 @@ function fewMicrostates(config: string): boolean {
 
 const terms: ComputeTask<{ config: string; gs: 'exact' | 'free' }> = {
 	light: ({ config }) => sheetIsLight(config),
-	run: ({ config, gs }): ApiResponses['GET /api/v1/terms'] => termSheet(config, { gs })
+	run: ({ config, gs }): ApiResponses['GET /api/v1/terms'] => termSheet(parseConfiguration(config), { gs })
 };
 
 const jj: ComputeTask<{ config: string; countsOnly: boolean }> = {
