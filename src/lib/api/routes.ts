@@ -32,6 +32,10 @@ const LISTED: Listed = {
 	'GET /api/v1/microstates': { summary: 'explicit microstates, a page at a time: ?config=2p2&offset=0&limit=50', access: 'public' },
 	'GET /api/v1/projects': { summary: 'your projects', access: 'signed-in' },
 	'POST /api/v1/projects': { summary: 'create a project { name, description }', access: 'signed-in' },
+	'GET /api/v1/projects/:projectId/activity': {
+		summary: 'the activity log, newest first: ?limit=50&cursor=&actor=<userId>&kind=entry.created',
+		access: 'viewer'
+	},
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },

@@ -8,6 +8,7 @@ import { projectAccess, type Actor } from '../access';
 import { ServiceError, badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { memberInputSchema, parseInput, projectInputSchema, projectPatchSchema, roleSchema } from '../validation';
+import { logActivity } from './activity';
 
 export function listProjects(actor: Actor) {
 	return db
@@ -36,6 +37,7 @@ export function createProject(actor: Actor, input: unknown) {
 	db.transaction((tx) => {
 		tx.insert(projects).values({ id, name: data.name, description: data.description, createdBy: actor.id }).run();
 		tx.insert(memberships).values({ projectId: id, userId: actor.id, role: 'owner' }).run();
+		logActivity(tx, { projectId: id, actor, kind: 'project.created', summary: `created the project “${data.name}”` });
 	});
 	return getProject(actor, id);
 }
@@ -43,10 +45,14 @@ export function createProject(actor: Actor, input: unknown) {
 export function updateProject(actor: Actor, projectId: string, input: unknown) {
 	projectAccess(actor, projectId, 'owner');
 	const data = parseInput(projectPatchSchema, input);
-	db.update(projects)
-		.set({ ...data, updatedAt: new Date() })
-		.where(eq(projects.id, projectId))
-		.run();
+	db.transaction((tx) => {
+		tx.update(projects)
+			.set({ ...data, updatedAt: new Date() })
+			.where(eq(projects.id, projectId))
+			.run();
+		const changed = [data.name !== undefined && 'name', data.description !== undefined && 'description'].filter(Boolean).join(' and ');
+		logActivity(tx, { projectId, actor, kind: 'project.updated', summary: `changed the project’s ${changed || 'settings'}` });
+	});
 	return getProject(actor, projectId);
 }
 
@@ -78,8 +84,22 @@ export function addMember(actor: Actor, projectId: string, input: unknown) {
 		.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, user.id)))
 		.get();
 	if (existing) throw conflict(`${user.name} is already a member (${existing.role})`, { field: 'email' });
-	db.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
+	db.transaction((tx) => {
+		tx.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.added',
+			summary: `added ${user.name} as ${data.role}`,
+			subject: `member:${user.id}`
+		});
+	});
 	return { userId: user.id, name: user.name, email: user.email, role: data.role };
+}
+
+/** A member's name for the log. */
+function memberName(userId: string): string {
+	return db.select({ name: users.name }).from(users).where(eq(users.id, userId)).get()?.name ?? 'someone';
 }
 
 function ownerCount(projectId: string): number {
@@ -111,6 +131,13 @@ export function changeMemberRole(actor: Actor, projectId: string, userId: string
 			.set({ role: newRole })
 			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
 			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.role_changed',
+			summary: `changed ${memberName(userId)}’s role from ${m.role} to ${newRole}`,
+			subject: `member:${userId}`
+		});
 	});
 }
 
@@ -123,5 +150,12 @@ export function removeMember(actor: Actor, projectId: string, userId: string) {
 		tx.delete(memberships)
 			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
 			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.removed',
+			summary: `removed ${memberName(userId)} (${m.role})`,
+			subject: `member:${userId}`
+		});
 	});
 }
