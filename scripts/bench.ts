@@ -6,5 +6,7 @@ console.log('== Term engine: generating-function counting against explicit enume
 benchTerms();
 console.log('\n== Exact Wigner symbols at the API limits, and jj levels ==');
 await import('./bench-wigner');
+console.log('\n== Energy solver: intermediate-coupling levels ==');
+(await import('./bench-energy')).main();
 console.log('\n== Line matcher: sorted transitions and binary search against brute force ==');
 benchMatcher();

@@ -11,11 +11,11 @@ test.describe('GET /api/v1/terms', () => {
 		expect(res.status()).toBe(200);
 		const body = await res.json();
 		expect(body.configuration).toMatchObject({ electrons: 21, parity: 'even' });
-		expect(body.microstates).toBe(120); // C(10,3) = 120
-		const summary = body.terms.map((t: { label: string; count: number }) => t.label + (t.count > 1 ? `(${t.count})` : '')).sort();
+		expect(body.microstates).toBe('120'); // C(10,3) = 120; every count is an exact decimal string
+		const summary = body.terms.map((t: { label: string; count: string }) => t.label + (t.count !== '1' ? `(${t.count})` : '')).sort();
 		expect(summary).toEqual(['2D(2)', '2F', '2G', '2H', '2P', '4F', '4P']);
 		const f4 = body.terms.find((t: { label: string }) => t.label === '4F');
-		expect(f4).toMatchObject({ S: '3/2', L: 3, count: 1, seniority: 3, weight: 28 });
+		expect(f4).toMatchObject({ S: '3/2', L: 3, count: '1', seniority: 3, seniorities: [{ seniority: 3, count: '1' }], weight: 28 });
 		// g(⁴F₃/₂) = 2/5 (Landé formula with g_s = 2).
 		expect(f4.levels[0]).toEqual({ J: '3/2', g: '2/5', gDecimal: 0.4, weight: 4 });
 		expect(body.hund).toMatchObject({ term: '4F', J: '3/2', rigorous: true });
@@ -27,6 +27,17 @@ test.describe('GET /api/v1/terms', () => {
 		const body = await res.json();
 		expect(body.error.token).toBe('2p7');
 		expect(body.error.message).toMatch(/at most 6/);
+	});
+
+	test('12o23 and 10m19-sized requests are answered at once: over the budget is a 400 stating the limit', async ({ request }) => {
+		// Regression: 12o23 once grew the server's heap past 4 GB.
+		const res = await request.get('/api/v1/terms?config=12o23');
+		expect(res.status()).toBe(400);
+		expect((await res.json()).error.message).toMatch(/over the limit of 15000/);
+		const ok = await request.get('/api/v1/terms?config=10m19');
+		expect(ok.status()).toBe(200);
+		// C(38,19) = 35 345 263 800 microstates (combinatorics).
+		expect((await ok.json()).microstates).toBe('35345263800');
 	});
 
 	test('over-long input is refused with the limit', async ({ request }) => {

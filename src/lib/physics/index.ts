@@ -44,6 +44,18 @@ export { exactToNumber, exactString, exactSquaredString, exactJson, type ExactSq
 export { couplingTable, MAX_J_COUPLING_TABLE } from './basis';
 export { couplingBridge, jjSpinOrbitWeight } from './bridge';
 export { termSheet, type TermSheet } from './report';
+export { intermediateLevels, MODEL_ENERGY_CAUTION, type IcLevel, type IcResult } from './levels-ic';
+export { couplingSweep, SWEEP_POINTS, type SweepResult } from './sweep';
+export { fitParameters, MAX_FIT_LEVELS, type FitInput, type FitResult, type ObservedLevel } from './fit';
+export {
+	radialParameters,
+	racahFromSlater,
+	slaterFromRacah,
+	condonShortleyDenominator,
+	type EnergyParameterInput
+} from './slater-parameters';
+export { checkDeterminantBudget, determinantCounts, MAX_BLOCK_DETERMINANTS, MAX_TOTAL_DETERMINANTS } from './determinants';
+export { symmetricEigen } from './symmetric-eigen';
 export {
 	airRefractiveIndex,
 	vacuumToAir,

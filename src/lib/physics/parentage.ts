@@ -65,14 +65,15 @@ export interface ParentagePath {
 function subshellTerms(s: Subshell): ParentTerm[] {
 	const out: ParentTerm[] = [];
 	const table = seniorityTable(s.l, s.occupancy);
-	const only = table.length === 1 && table[0].seniorities.length === 1;
+	const occurrences = (entry: (typeof table)[number]) => entry.seniorities.reduce((a, x) => a + x.count, 0);
+	const only = table.length === 1 && occurrences(table[0]) === 1;
 	for (const entry of table) {
-		const repeated = entry.seniorities.length > 1;
-		entry.seniorities.forEach((v, i) => {
-			const sameV = entry.seniorities.filter((x) => x === v).length;
-			const index = sameV > 1 ? entry.seniorities.slice(0, i + 1).filter((x) => x === v).length : null;
-			out.push({ subshell: s, twoS: entry.twoS, L: entry.L, seniority: v, index, repeated, only });
-		});
+		const repeated = occurrences(entry) > 1;
+		// Seniorities come as counts; an index tells apart occurrences that share one seniority.
+		for (const { seniority: v, count } of entry.seniorities) {
+			for (let k = 1; k <= count; k++)
+				out.push({ subshell: s, twoS: entry.twoS, L: entry.L, seniority: v, index: count > 1 ? k : null, repeated, only });
+		}
 	}
 	return out.sort((a, b) => b.twoS - a.twoS || b.L - a.L || a.seniority - b.seniority || (a.index ?? 0) - (b.index ?? 0));
 }

@@ -7,12 +7,13 @@ import { and, eq, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { levelAnnotations, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
-import { badRequest, conflict, notFound } from '../errors';
+import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { readEntry } from './shelf';
 import { logActivity, noteSummary } from './activity';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput } from '../validation';
 import { termSheet, type TermSheet } from '../../physics/report';
+import { BudgetError } from '../../physics/budget';
 import { levelKey, levelRefs, levelText } from '../../levels';
 
 const annotationColumns = {
@@ -26,6 +27,27 @@ const annotationColumns = {
 	updatedAt: levelAnnotations.updatedAt,
 	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.updatedBy})`
 };
+
+/**
+ * The Term sheet and level list of a stored entry. An entry saved before the engine's budgets
+ * existed may be over them: that is answered with a clear 422 instead of running the computation.
+ */
+function entryLevels(entry: { notation: string }): { sheet: TermSheet; refs: ReturnType<typeof levelRefs> } {
+	try {
+		const sheet = termSheet(entry.notation);
+		return { sheet, refs: levelRefs(sheet.terms) };
+	} catch (e) {
+		if (e instanceof BudgetError)
+			throw new ServiceError(
+				422,
+				`The configuration ${entry.notation} of this entry is too large to show: ${e.message}. Edit the entry to a smaller configuration.`,
+				{
+					limit: e.limit
+				}
+			);
+		throw e;
+	}
+}
 
 function readAnnotations(entryId: string) {
 	return db.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.entryId, entryId)).all();
@@ -41,10 +63,10 @@ export function listAnnotations(actor: Actor, projectId: string, entryId: string
 export function annotatedLevels(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'viewer');
 	const entry = readEntry(projectId, entryId);
-	const sheet: TermSheet = termSheet(entry.notation);
+	const { sheet, refs } = entryLevels(entry);
 	const notes = new Map(readAnnotations(entryId).map((a) => [a.levelKey, a]));
 	const byTerm = new Map(sheet.terms.map((t) => [t.label, t]));
-	const levels = levelRefs(sheet.terms).map((ref) => {
+	const levels = refs.map((ref) => {
 		const term = byTerm.get(ref.term)!;
 		const level = term.levels.find((lv) => lv.J === ref.J)!;
 		const key = levelKey(ref);
@@ -53,7 +75,7 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 			...ref,
 			multiplicity: term.multiplicity,
 			letter: term.letter,
-			count: term.count,
+			count: Number(term.count), // at most MAX_ENTRY_LEVELS (levelRefs checks), so exact
 			g: level.g,
 			gDecimal: level.gDecimal,
 			hundRank: term.hundRank,
@@ -70,7 +92,7 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 	projectAccess(actor, projectId, 'editor');
 	const data = parseInput(annotationInputSchema, input);
 	const entry = readEntry(projectId, entryId);
-	const known = new Set(levelRefs(termSheet(entry.notation).terms).map(levelKey));
+	const known = new Set(entryLevels(entry).refs.map(levelKey));
 	if (!known.has(data.levelKey))
 		throw badRequest(
 			`"${data.levelKey}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`,
