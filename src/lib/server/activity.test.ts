@@ -8,7 +8,7 @@ import { ServiceError } from './errors';
 import type { Actor } from './access';
 import { sqlite } from './db';
 import { signUp } from './services/users';
-import { addMember, changeMemberRole, createProject, removeMember, updateProject } from './services/projects';
+import { addMember, changeMemberRole, createProject, leaveProject, removeMember, updateProject } from './services/projects';
 import { createEntry, deleteEntry, listEntries, updateEntry } from './services/shelf';
 import { deleteAnnotation, saveAnnotation } from './services/annotations';
 import { activityActors, changedFields, listActivity } from './services/activity';
@@ -64,6 +64,12 @@ describe('each change writes exactly one log line', () => {
 		expect(added(() => removeMember(owner, projectId, stranger.id))).toMatchObject([
 			{ kind: 'member.removed', summary: 'removed Sam Stranger (viewer)' }
 		]);
+		addMember(owner, projectId, { email: 'sam@example.org', role: 'viewer' });
+		expect(added(() => leaveProject(stranger, projectId))).toMatchObject([
+			{ kind: 'member.left', actorName: 'Sam Stranger', summary: 'left the project (was viewer)' }
+		]);
+		// An address without an account answers the same and changes nothing, so it logs nothing.
+		expect(added(() => addMember(owner, projectId, { email: 'nobody@example.org', role: 'viewer' }))).toEqual([]);
 	});
 
 	it('Shelf entries and level notes', () => {
@@ -129,7 +135,7 @@ describe('filters and pages', () => {
 		expect(emil.every((l) => l.actorName === 'Emil Editor')).toBe(true);
 		const roles = listActivity(viewer, projectId, { kind: 'member.role_changed' }).items;
 		expect(roles).toHaveLength(1);
-		expect(activityActors(viewer, projectId).map((a) => a.name)).toEqual(['Emil Editor', 'Olga Owner']);
+		expect(activityActors(viewer, projectId).map((a) => a.name)).toEqual(['Emil Editor', 'Olga Owner', 'Sam Stranger']);
 	});
 
 	it('pages newest first without gaps or repeats', () => {
