@@ -190,6 +190,7 @@ export interface ApiResponses {
 	'POST /api/v1/match': MatchResponse;
 	'GET /api/v1/projects': { projects: ProjectListItem[] };
 	'POST /api/v1/projects': { project: ProjectJson };
+	'GET /api/v1/projects/:projectId/backup': null;
 	'GET /api/v1/projects/:projectId/activity': { items: ActivityJson[]; nextCursor: string | null };
 	'GET /api/v1/projects/:projectId': { project: ProjectJson };
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
