@@ -1,24 +1,9 @@
 import type { RequestHandler } from './$types';
-import { formatConfiguration, parseConfiguration } from '$lib/physics/parse';
-import { couplingBridge } from '$lib/physics/bridge';
-import { halfString } from '$lib/physics/half';
-import { api, queryParam, reply } from '$lib/server/http';
+import { api, queryParam } from '$lib/server/http';
+import { computeResponse } from '$lib/server/compute/pool';
 
-/** LS ↔ jj correlation by J (non-crossing rule), both sides in schematic order: `?config=2p 3p`. */
-export const GET: RequestHandler = api((event) => {
-	const cfg = parseConfiguration(queryParam(event, 'config'));
-	const b = couplingBridge(cfg);
-	return reply('GET /api/v1/bridge', {
-		configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },
-		schematic: true,
-		ls: b.ls.map((x) => ({ label: x.label, J: halfString(x.twoJ) })),
-		jj: b.jj.map((x) => ({
-			label: x.label,
-			J: halfString(x.twoJ),
-			group: x.level.couplingLabel,
-			subshells: x.level.subshellLabel,
-			spinOrbitWeight: x.spinOrbitWeight
-		})),
-		links: b.links.map((l) => ({ J: halfString(l.twoJ), ls: l.ls, jj: l.jj }))
-	});
-});
+/**
+ * LS ↔ jj correlation by J (non-crossing rule), both sides in schematic order: `?config=2p 3p`.
+ * Large configurations are computed in the worker pool (src/lib/server/compute).
+ */
+export const GET: RequestHandler = api((event) => computeResponse('bridge', { config: queryParam(event, 'config') }));
