@@ -12,6 +12,7 @@ import { readEntry } from './shelf';
 import { logActivity, noteSummary } from './activity';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput } from '../validation';
+import { parseConfiguration } from '../../physics/parse';
 import { termSheet, type TermSheet } from '../../physics/report';
 import { BudgetError } from '../../physics/budget';
 import { levelKey, levelRefs, levelText } from '../../levels';
@@ -34,7 +35,7 @@ const annotationColumns = {
  */
 function entryLevels(entry: { notation: string }): { sheet: TermSheet; refs: ReturnType<typeof levelRefs> } {
 	try {
-		const sheet = termSheet(entry.notation);
+		const sheet = termSheet(parseConfiguration(entry.notation));
 		return { sheet, refs: levelRefs(sheet.terms) };
 	} catch (e) {
 		if (e instanceof BudgetError)
