@@ -13,6 +13,8 @@ export interface AnnotatedLevelRow {
 	J: string;
 	g: string | null;
 	odd: boolean;
+	/** "3d⁶(⁵D)4s ⁶D"; null when the engine leaves parentage out. */
+	parentage?: string | null;
 	annotation: {
 		observedEnergy: number | null;
 		uncertainty: number | null;
@@ -41,5 +43,6 @@ export const annotatedLevelColumns: Column<AnnotatedLevelRow>[] = [
 	{ key: 'status', latex: 'Status', value: (r) => r.annotation?.status ?? null },
 	{ key: 'comment', latex: 'Comment', value: (r) => r.annotation?.comment ?? null },
 	{ key: 'updated_by', inLatex: false, value: (r) => r.annotation?.updatedBy ?? null },
-	{ key: 'updated_at', inLatex: false, value: (r) => (r.annotation ? iso(r.annotation.updatedAt) : null) }
+	{ key: 'updated_at', inLatex: false, value: (r) => (r.annotation ? iso(r.annotation.updatedAt) : null) },
+	{ key: 'parentage', inLatex: false, value: (r) => r.parentage ?? null }
 ];
