@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { HUND_CAUTION, hundGround, hundOrder, hundWording } from './hund';
+import { hundGround, hundOrder, hundWording } from './hund';
 import { levelLabel } from './terms';
 import { parseConfiguration } from './parse';
 import { groundConfiguration } from './elements';
@@ -125,14 +125,6 @@ describe('heuristic order of terms', () => {
 			const b = order[i].term;
 			expect(a.twoS > b.twoS || (a.twoS === b.twoS && a.L >= b.L)).toBe(true);
 		}
-	});
-});
-
-describe('the caution', () => {
-	it('says the rules are approximations, rigorous only for one open subshell, and broken by known ground levels', () => {
-		expect(HUND_CAUTION).toMatch(/approximations/);
-		expect(HUND_CAUTION).toMatch(/single open subshell of equivalent electrons/);
-		expect(HUND_CAUTION).toMatch(/known ground levels break the simple rules/);
 	});
 });
 

@@ -1,7 +1,8 @@
 /**
- * Role rules of PRODUCT.md ("owners manage members; editors change content; viewers read;
- * non-members get 404") checked through the service layer on a private in-memory database.
- * Expected outcomes are the product's own rules (common practice, no source).
+ * The role rules written in DEVELOPERS.md and at the top of src/lib/server/access.ts ("owners manage
+ * members; editors change content; viewers read; non-members get 404") checked through the service
+ * layer on a private in-memory database. Expected outcomes are the product's own rules (common
+ * practice for team tools, no outside source).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ServiceError } from './errors';
