@@ -46,7 +46,7 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	await page.getByRole('link', { name: 'LaTeX' }).click();
 	const tex = await (await download).path().then((p) => import('node:fs').then((fs) => fs.readFileSync(p!, 'utf8')));
 	expect(tex).toContain('\\toprule');
-	expect(tex).toContain('$^{6}\\mathrm{D}_{9/2}$ & $14/9$ & 0 & 0.01 & confirmed');
+	expect(tex).toContain('$^{6}\\mathrm{D}_{9/2}$ & $14/9$ & $0$ & $0.01$ & confirmed');
 
 	// A viewer sees the note but has no way to change it, and the API refuses.
 	const viewer = await newUser(browser, 'Vic Viewer', 'shelf-viewer');

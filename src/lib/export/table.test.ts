@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
+import { latexConfiguration, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
 import { levelColumns, levelRows } from './term-sheet';
 import { termSheet } from '../physics/report';
 
@@ -21,7 +21,7 @@ describe('exports', () => {
 		expect(tex).toContain('\\toprule');
 		expect(tex).toContain('\\midrule');
 		expect(tex).toContain('\\bottomrule');
-		expect(tex).toContain('\\begin{tabular}{lr}');
+		expect(tex).toContain('\\begin{longtable}{lr}');
 		expect(tex).toContain('x\\_1 &  \\\\');
 	});
 
@@ -37,5 +37,30 @@ describe('exports', () => {
 		const csv = toCsv(rows, levelColumns);
 		expect(csv.split('\r\n')[0]).toBe('term,count,seniority,S,L,parity,J,g,g_decimal,weight');
 		expect(csv).toContain('7S,1,,3,0,even,3,2,2,7');
+	});
+
+	// longtable package manual (Carlisle): \endfirsthead, \endhead, \endfoot, \endlastfoot.
+	it('long tables break across pages: longtable with the header repeated and a typeset caption', () => {
+		const rows = Array.from({ length: 80 }, (_, i) => ({ name: `r${i}`, value: i }));
+		const tex = toLatex(rows, columns, { text: 'Levels of 3d6 4s', latex: `Levels of ${latexConfiguration('3d6 4s')}` });
+		expect(tex).toContain('\\usepackage{longtable}');
+		expect(tex).not.toContain('\\begin{table}');
+		for (const cmd of ['\\endfirsthead', '\\endhead', '\\endfoot', '\\endlastfoot']) expect(tex).toContain(cmd);
+		expect(tex).toContain('\\caption{Levels of 3d$^{6}$~4s}');
+		expect(tex.split('\n').filter((l) => /^ {2}r\d+ & /.test(l))).toHaveLength(80);
+	});
+
+	it('configurations in LaTeX keep the core as typed and raise occupancies: [Ar] 3d6 4s, 4f⁷5d6s², 2p^{3}', () => {
+		// Spectroscopic notation with superscript occupancies (Cowan 1981 §1-5), core shorthand as typed.
+		expect(latexConfiguration('[Ar] 3d6 4s')).toBe('[Ar]~3d$^{6}$~4s');
+		expect(latexConfiguration('[Xe] 4f⁷5d6s²')).toBe('[Xe]~4f$^{7}$~5d~6s$^{2}$');
+		expect(latexConfiguration('1s2.2s2.2p^{3}')).toBe('1s$^{2}$~2s$^{2}$~2p$^{3}$');
+	});
+
+	it('the Term sheet export marks odd terms with ° like the Shelf export (2p3: 4S°)', () => {
+		// 2p³ gives ⁴S°, ²D°, ²P°, odd parity (Condon & Shortley 1935, ch. VII).
+		const csv = toCsv(levelRows(termSheet('2p3')), levelColumns);
+		expect(csv).toContain('4S°,');
+		expect(csv).not.toMatch(/4So,/);
 	});
 });

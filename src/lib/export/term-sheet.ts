@@ -46,7 +46,7 @@ export const levelColumns: Column<LevelRow>[] = [
 	{
 		key: 'term',
 		latex: 'Term',
-		value: (r) => r.term + (odd(r) ? 'o' : ''),
+		value: (r) => r.term + (odd(r) ? '°' : ''),
 		latexValue: (r) => latexTerm(r.multiplicity, r.letter, null, odd(r))
 	},
 	{ key: 'count', latex: 'Count', align: 'r', value: (r) => r.count },

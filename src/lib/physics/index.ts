@@ -18,6 +18,8 @@ export {
 	MAX_CONFIGURATION_LENGTH
 } from './parse';
 export { SpeciesError, parseSpecies, groundConfiguration, speciesLabel, elementByZ, ION_CAUTION } from './elements';
+export { impliedClosedSubshells, completeConfiguration, sameConfiguration, checkElectrons } from './implied';
+export type { ElectronCheck } from './implied';
 export { microstateGrid, microstateTotal, countAt, decomposeGrid, mjCounts, subshellGrid, MAX_GRID_WORK } from './microstates';
 export { termsOf, levelsOf, statisticalWeight, levelCountsByJ, termLabel, levelLabel, termSummary, termAndLevelCounts } from './terms';
 export { seniorityTable, senioritiesOf } from './seniority';

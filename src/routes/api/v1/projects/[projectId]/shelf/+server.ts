@@ -3,7 +3,10 @@ import type { RequestHandler } from './$types';
 import { createEntry, listEntries } from '$lib/server/services/shelf';
 import { api, apiActor, readJson } from '$lib/server/http';
 
-export const GET: RequestHandler = api((event) => json({ entries: listEntries(apiActor(event), event.params.projectId) }));
+/** One page of the Shelf: `?limit=1…200` (default 50), `&cursor=` the `nextCursor` of the page before, `&q=` filter text. */
+export const GET: RequestHandler = api((event) =>
+	json(listEntries(apiActor(event), event.params.projectId, Object.fromEntries(event.url.searchParams)))
+);
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);

@@ -5,10 +5,14 @@ import { api, apiActor, readJson } from '$lib/server/http';
 
 export const GET: RequestHandler = api((event) => json({ entry: getEntry(apiActor(event), event.params.projectId, event.params.entryId) }));
 
-/** Body: the fields to change plus `version`, the version you last read (stale versions get 409). */
+/**
+ * Body: only the fields to change plus `version`, the version you last read (stale versions get 409).
+ * A new configuration detaches the entry's notes (`detachedNotes` says how many).
+ */
 export const PATCH: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return json({ entry: updateEntry(actor, event.params.projectId, event.params.entryId, await readJson(event)) });
+	const { detachedNotes, ...entry } = updateEntry(actor, event.params.projectId, event.params.entryId, await readJson(event));
+	return json({ entry, detachedNotes });
 });
 
 export const DELETE: RequestHandler = api((event) => {

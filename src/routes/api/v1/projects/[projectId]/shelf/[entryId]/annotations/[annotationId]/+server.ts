@@ -1,0 +1,18 @@
+import { json } from '@sveltejs/kit';
+import type { RequestHandler } from './$types';
+import { deleteAnnotationById, reattachAnnotation } from '$lib/server/services/annotations';
+import { api, apiActor, readJson } from '$lib/server/http';
+
+/** Reattaches a note (e.g. a detached one) to a level of the present configuration. Body: { levelKey, version }. */
+export const PATCH: RequestHandler = api(async (event) => {
+	const actor = apiActor(event);
+	const { projectId, entryId, annotationId } = event.params;
+	return json({ annotation: reattachAnnotation(actor, projectId, entryId, annotationId, await readJson(event)) });
+});
+
+/** Deletes one note, attached or detached. */
+export const DELETE: RequestHandler = api((event) => {
+	const { projectId, entryId, annotationId } = event.params;
+	deleteAnnotationById(apiActor(event), projectId, entryId, annotationId);
+	return new Response(null, { status: 204 });
+});
