@@ -95,6 +95,8 @@ test('from "Fe II" in the Builder to a saved, annotated and exported level table
 	await expect(page).toHaveURL(/\/shelf\/new\?/);
 	await expect(page.getByLabel('Configuration', { exact: true })).toHaveValue('[Ar] 3d6 4s');
 	await expect(page.getByLabel('Species')).toHaveValue('Fe II');
+	// The title is prefilled from the species and the configuration.
+	await expect(page.getByLabel('Title')).toHaveValue('Fe II [Ar] 3d6 4s');
 	await page.getByLabel('Title').fill('Fe II ground configuration');
 	await page.getByRole('button', { name: 'Save to Shelf' }).click();
 	await expect(page.getByTestId('entry-title')).toHaveText('Fe II ground configuration');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { HUND_CAUTION, hundGround, hundOrder } from './hund';
+import { HUND_CAUTION, hundGround, hundOrder, hundWording } from './hund';
 import { levelLabel } from './terms';
 import { parseConfiguration } from './parse';
 import { groundConfiguration } from './elements';
@@ -133,5 +133,24 @@ describe('the caution', () => {
 		expect(HUND_CAUTION).toMatch(/approximations/);
 		expect(HUND_CAUTION).toMatch(/single open subshell of equivalent electrons/);
 		expect(HUND_CAUTION).toMatch(/known ground levels break the simple rules/);
+	});
+});
+
+describe('Hund wording: ground level or lowest level (heuristic)', () => {
+	it('one open subshell in a ground-like configuration says ground level: 2p2, [Ar] 3d6 4s2', () => {
+		// C I 2p² and Fe I 3d⁶4s² are ground configurations (NIST/CRC periodic table).
+		expect(hundWording(parseConfiguration('1s2 2s2 2p2')).kind).toBe('ground');
+		expect(hundWording(parseConfiguration('[Ar] 3d6 4s2')).phrase).toBe("ground level by Hund's rules");
+	});
+
+	it('several open subshells say lowest level (heuristic): 3d6 4s, 2p5 3p', () => {
+		expect(hundWording(parseConfiguration('3d6 4s')).phrase).toBe("lowest level by Hund's rules (heuristic)");
+		expect(hundWording(parseConfiguration('2p5 3p')).kind).toBe('lowest');
+	});
+
+	it('an excited configuration with one open subshell says lowest level: 1s2 2s2 3p2, 2p5 3s2', () => {
+		// 2p empty below 3p, 2p open below a full 3s: excited by the Madelung filling order (Madelung 1936).
+		expect(hundWording(parseConfiguration('1s2 2s2 3p2')).kind).toBe('lowest');
+		expect(hundWording(parseConfiguration('1s2 2s2 2p5 3s2')).kind).toBe('lowest');
 	});
 });

@@ -145,3 +145,71 @@ export function hundOrder(input: Configuration | readonly Subshell[]): HundOrder
 		return { term, twoJs: order === 'inverted' ? js.reverse() : js, order };
 	});
 }
+
+/** How the Hund's-rule level may be named on screen (see `hundWording`). */
+export interface HundWording {
+	/** 'ground' only for one open subshell in a configuration that is not excited; else 'lowest'. */
+	kind: 'ground' | 'lowest';
+	/** "ground level by Hund's rules" or "lowest level by Hund's rules (heuristic)". */
+	phrase: string;
+	/** Why this phrase: which rule made the configuration count as excited or multi-open. */
+	why: string;
+}
+
+const madelungRank = (s: { n: number; l: number }) => (s.n + s.l) * 100 + s.n;
+
+/**
+ * True when the configuration, within the span of subshells it lists, leaves a subshell that comes
+ * earlier in the Madelung (n + l, then n) filling order than an occupied one not full: 1s2 2s2 3p2,
+ * 2p5 3s2, [Ar] 3d7 (4s empty). Subshells below the lowest one listed count as implied full ("3d7"
+ * alone is not called excited). A rule of thumb (Madelung 1936); ions often break it.
+ */
+function looksExcited(subshells: readonly Subshell[]): boolean {
+	if (subshells.length === 0) return false;
+	const ranks = subshells.map(madelungRank);
+	const lowest = Math.min(...ranks);
+	const highest = Math.max(...ranks);
+	for (let n = 1; n <= 20; n++) {
+		for (let l = 0; l < n; l++) {
+			const r = madelungRank({ n, l });
+			if (r < lowest || r >= highest) continue;
+			const s = subshells.find((x) => x.n === n && x.l === l);
+			if (!s || s.occupancy < subshellCapacity(l)) return true;
+		}
+	}
+	return false;
+}
+
+/**
+ * The words for the Hund's-rule level of a configuration. "ground level by Hund's rules" only
+ * when one subshell is open (or none) and the configuration does not look excited (the
+ * rule of `looksExcited`); otherwise "lowest level by Hund's rules (heuristic)", because for
+ * several open subshells or an excited configuration the rules are a heuristic and the level is
+ * at best the lowest of this configuration, not of the atom (Cowan 1981, sec. 4.10; Condon &
+ * Shortley 1935, ch. XII on exceptions).
+ * Throws ConfigurationError for an invalid subshell.
+ * @example hundWording(parseConfiguration('3d6 4s')).phrase // "lowest level by Hund's rules (heuristic)"
+ */
+export function hundWording(input: Configuration | readonly Subshell[]): HundWording {
+	const subshells = asSubshells(input);
+	const open = openSubshells(subshells);
+	if (open.length > 1) {
+		return {
+			kind: 'lowest',
+			phrase: "lowest level by Hund's rules (heuristic)",
+			why: `${open.length} open subshells: Hund's rules only suggest which level of this configuration is lowest.`
+		};
+	}
+	if (looksExcited(subshells)) {
+		return {
+			kind: 'lowest',
+			phrase: "lowest level by Hund's rules (heuristic)",
+			why: 'An excited configuration (a subshell earlier in the filling order is not full): the level is the lowest of this configuration at best, not the ground level of the atom or ion.'
+		};
+	}
+	return {
+		kind: 'ground',
+		phrase: "ground level by Hund's rules",
+		why: "One open subshell of equivalent electrons: Hund's rules give the ground level."
+	};
+}

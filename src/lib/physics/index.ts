@@ -2,7 +2,7 @@
  * Termwright's term engine: pure TypeScript, plain data in and out, no framework or database.
  * Import from here in scripts; the app imports the modules directly.
  */
-export type { Configuration, Subshell, Term } from './types';
+export type { Configuration, Subshell, Term, ParentSpec, TermSpec } from './types';
 export { halfString, parseHalf } from './half';
 export { L_LETTERS, TERM_LETTERS, lLetter, letterToL, termLetter, termLetterToL } from './letters';
 export {
@@ -24,7 +24,9 @@ export { microstateGrid, microstateTotal, countAt, decomposeGrid, mjCounts, subs
 export { termsOf, levelsOf, statisticalWeight, levelCountsByJ, termLabel, levelLabel, termSummary, termAndLevelCounts } from './terms';
 export { seniorityTable, senioritiesOf } from './seniority';
 export { landeG, effectiveMagnetonNumber, fractionString, GS_FREE_ELECTRON, LANDE_J0_NOTE } from './lande';
-export { hundGround, hundOrder, HUND_CAUTION } from './hund';
+export { hundGround, hundOrder, hundWording, HUND_CAUTION } from './hund';
+export { termDisplay, levelDisplay } from './display';
+export { parentageOf, onTypedParents, MAX_PARENTAGE_OCCURRENCES, type ParentagePath } from './parentage';
 export { listMicrostates, iterateMicrostates } from './listing';
 export { termsByEnumeration } from './enumerate';
 export { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from './jj';

@@ -257,3 +257,39 @@ describe('checked subshell lists', () => {
 		expect(openSubshells(parseConfiguration('[Ar] 3d5 4s')).map((s) => s.l)).toEqual([2, 0]);
 	});
 });
+
+describe('parent terms typed in parentheses', () => {
+	it('3d6(5D) 4s reads as 3d6 4s with the parent ⁵D on 3d', () => {
+		// Notation of the reference tables, e.g. Fe II 3d⁶(⁵D)4s (NIST ASD, from memory).
+		const cfg = parseConfiguration('3d6(5D) 4s');
+		expect(cfg.subshells).toEqual(parseConfiguration('3d6 4s').subshells);
+		expect(cfg.parents).toEqual([{ n: 3, l: 2, own: { twoS: 4, L: 2, seniority: null, index: null }, intermediate: null }]);
+	});
+
+	it('superscripts, the odd mark, seniority and index are read; no space is needed after the parenthesis', () => {
+		expect(parseConfiguration('3d⁶(⁵D)4s').parents?.[0].own).toMatchObject({ twoS: 4, L: 2 });
+		expect(parseConfiguration('2p5(2P°) 3p').parents?.[0]).toMatchObject({ own: null, intermediate: { twoS: 1, L: 1 } });
+		expect(parseConfiguration('3d4(3F, v=2) 4s').parents?.[0].own).toEqual({ twoS: 2, L: 3, seniority: 2, index: null });
+		expect(parseConfiguration('4f3(2D,v=3,#2) 6s').parents?.[0].own).toEqual({ twoS: 1, L: 2, seniority: 3, index: 2 });
+		expect(parseConfiguration('3d6(5D).4s').subshells).toHaveLength(2);
+	});
+
+	it('a lone electron takes the intermediate term: 3d5(6S) 4s(7S) 4p', () => {
+		const cfg = parseConfiguration('3d5(6S) 4s(7S) 4p');
+		expect(cfg.parents?.map((p) => [p.n, p.l, p.own?.twoS ?? null, p.intermediate?.twoS ?? null])).toEqual([
+			[3, 2, 5, null],
+			[4, 0, null, 6]
+		]);
+	});
+
+	it('configurations without parentheses carry no parents field', () => {
+		expect(parseConfiguration('[Ar] 3d5 4s')).not.toHaveProperty('parents');
+	});
+
+	it('bad parent terms are refused with what is allowed', () => {
+		expect(errorOf('3d6(5X) 4s').message).toMatch(/not a term letter/);
+		expect(errorOf('3d6(D) 4s').message).toMatch(/write the term as multiplicity and letter/);
+		expect(errorOf('2p6(1S) 3s').message).toMatch(/2p6 is full/);
+		expect(errorOf('3d6 4s(6D)').message).toMatch(/last open subshell/);
+	});
+});

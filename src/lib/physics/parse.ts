@@ -7,8 +7,8 @@
  * electrons (Condon & Shortley 1935, parity of a configuration; Cowan 1981, same), so only the
  * l·N of each subshell matters.
  */
-import type { Configuration, Subshell } from './types';
-import { L_LETTERS, MAX_LETTER_L, letterToL, lLetter } from './letters';
+import type { Configuration, ParentSpec, Subshell, TermSpec } from './types';
+import { L_LETTERS, MAX_LETTER_L, letterToL, lLetter, termLetterToL } from './letters';
 
 /** A configuration that cannot be read or does not exist; `token` is the offending piece of the input. */
 /** "a" or "an" before a letter or number as it is read aloud: an s, an f, a p, an 8d, an 11s. */
@@ -221,6 +221,43 @@ export function asSubshells(input: Configuration | readonly Subshell[]): Subshel
 	return configurationOf(input).subshells;
 }
 
+// A parent or intermediate term in parentheses: multiplicity (plain or superscript digits), the L
+// letter, an optional odd mark (° or o), then optionally ", v=4" (seniority) and ", #2" (index).
+const TERM_GROUP_RE = /\(([^()]*)\)/y;
+const TERM_SPEC_RE = /^(\d+|[⁰¹²³⁴⁵⁶⁷⁸⁹]+)([A-Z])(?:°|o)?(?:,?v=?(\d+))?(?:,?#(\d+))?$/u;
+
+/** Reads "5D", "⁵D", "2P°", "3F,v=2", "2D,v=3,#2" (spaces already removed) into a TermSpec. */
+function readTermSpec(inner: string, token: string): TermSpec {
+	const m = TERM_SPEC_RE.exec(inner);
+	const allowed = 'write the term as multiplicity and letter, e.g. (5D), (²P°), (3F, v=2) or (2D, v=3, #2)';
+	if (!m) throw new ConfigurationError(`cannot read the term "(${inner})" in "${token}": ${allowed}`, token);
+	const multiplicity = Number(
+		m[1]
+			.split('')
+			.map((ch) => (SUPERSCRIPT_DIGITS.includes(ch) ? SUPERSCRIPT_DIGITS.indexOf(ch) : ch))
+			.join('')
+	);
+	const L = termLetterToL(m[2]);
+	if (L === null) throw new ConfigurationError(`"${m[2]}" in "${token}" is not a term letter: use S P D F G H I K L M N …`, token);
+	if (multiplicity < 1) throw new ConfigurationError(`the multiplicity in "${token}" must be at least 1 (2S+1)`, token);
+	return {
+		twoS: multiplicity - 1,
+		L,
+		seniority: m[3] === undefined ? null : Number(m[3]),
+		index: m[4] === undefined ? null : Number(m[4])
+	};
+}
+
+/** True when l^N has a single term (one electron, one hole, or full): its term need not be typed. */
+function hasOneTerm(s: Subshell): boolean {
+	return s.occupancy === 1 || s.occupancy >= subshellCapacity(s.l) - 1;
+}
+
+/** Spaces inside parentheses belong to the term ("(3F, v=2)"), not between subshells. */
+function joinParentheses(text: string): string {
+	return text.replace(/\([^()]*\)/g, (m) => m.replace(/\s+/g, ''));
+}
+
 const SEPARATORS = /[\s.·⋅]+/u;
 const CORE_RE = /\[([^\]\s]*)\]/y;
 // n, letter, then an optional occupancy: ^{N}, ^N, N (plain digits, maybe negative) or superscript digits.
@@ -252,11 +289,14 @@ export function parseConfiguration(text: string): Configuration {
 			`${text.slice(0, 20)}…`
 		);
 	}
-	const chunks = text.split(SEPARATORS).filter((c) => c.length > 0);
+	const chunks = joinParentheses(text)
+		.split(SEPARATORS)
+		.filter((c) => c.length > 0);
 	if (chunks.length === 0) {
 		throw new ConfigurationError('the configuration is empty: write subshells such as "1s2 2s2 2p3" or "[Ne] 3s"', '');
 	}
 	const entries: { s: Subshell; token: string; fromCore: string | null }[] = [];
+	const parents: ParentSpec[] = [];
 	let core: { name: string; token: string } | null = null;
 	for (const chunk of chunks) {
 		let pos = 0;
@@ -287,7 +327,7 @@ export function parseConfiguration(text: string): Configuration {
 			const token = m[0];
 			const end = re.lastIndex;
 			const plainOccupancy = m[6] === undefined;
-			if (re === SUBSHELL_RE && plainOccupancy && end < chunk.length && chunk[end] !== '[') {
+			if (re === SUBSHELL_RE && plainOccupancy && end < chunk.length && chunk[end] !== '[' && chunk[end] !== '(') {
 				throw new ConfigurationError(
 					`"${chunk}" cannot be split into subshells: put a space or a dot between subshells written with plain digits (e.g. 3d5 4s or 3d5.4s)`,
 					chunk
@@ -323,9 +363,57 @@ export function parseConfiguration(text: string): Configuration {
 			checkSubshell(s, token);
 			entries.push({ s, token, fromCore: null });
 			pos = end;
+			const groups: string[] = [];
+			for (;;) {
+				TERM_GROUP_RE.lastIndex = pos;
+				const g = TERM_GROUP_RE.exec(chunk);
+				if (!g) break;
+				groups.push(g[1]);
+				pos = TERM_GROUP_RE.lastIndex;
+			}
+			if (groups.length > 0) parents.push(parentSpecOf(s, groups, `${token}${groups.map((g) => `(${g})`).join('')}`));
 		}
 	}
-	return assemble(entries, core ? core.name : null);
+	const cfg = assemble(entries, core ? core.name : null);
+	return parents.length > 0 ? { ...cfg, parents: checkParents(cfg, parents) } : cfg;
+}
+
+/**
+ * One or two terms typed after a subshell. With one term: the subshell's own term, unless the
+ * subshell has only one term (4s, 2p5), then the intermediate after it. With two: own, then intermediate.
+ */
+function parentSpecOf(s: Subshell, groups: string[], token: string): ParentSpec {
+	if (s.occupancy === subshellCapacity(s.l)) {
+		throw new ConfigurationError(`"${token}": ${subshellLabel(s)} is full, so it has no parent term to choose (only ¹S)`, token);
+	}
+	if (groups.length > 2) {
+		throw new ConfigurationError(
+			`"${token}" has ${groups.length} terms in parentheses: give at most two, the subshell's own term and then the intermediate term`,
+			token
+		);
+	}
+	const specs = groups.map((g) => readTermSpec(g, token));
+	if (specs.length === 2) return { n: s.n, l: s.l, own: specs[0], intermediate: specs[1] };
+	return hasOneTerm(s) ? { n: s.n, l: s.l, own: null, intermediate: specs[0] } : { n: s.n, l: s.l, own: specs[0], intermediate: null };
+}
+
+/** Typed parents must follow open subshells; an intermediate after the last open subshell is the term itself and is refused. */
+function checkParents(cfg: Configuration, parents: ParentSpec[]): ParentSpec[] {
+	const open = openSubshells(cfg);
+	const last = open[open.length - 1];
+	for (const p of parents) {
+		const label = `${p.n}${lLetter(p.l)}`;
+		if (p.intermediate && last && p.n === last.n && p.l === last.l) {
+			throw new ConfigurationError(
+				`${label} is the last open subshell, so a term after it would be the final term: pick the final term in the Term sheet instead`,
+				label
+			);
+		}
+		if (p.intermediate && open.length > 0 && p.n === open[0].n && p.l === open[0].l && p.own) {
+			throw new ConfigurationError(`${label} is the first open subshell: its intermediate term is its own term, give one term only`, label);
+		}
+	}
+	return parents.sort(bySubshellOrder);
 }
 
 /** Options of `formatConfiguration`. */

@@ -65,3 +65,48 @@ describe('Term sheet', () => {
 		expect(String(s.microstates)).toBe(String(s.weightSum));
 	});
 });
+
+describe('Term sheet labels and parentage', () => {
+	it('3d6 4s: every term has its parentage, ⁶D on ⁵D; the lowest level is named as a heuristic', () => {
+		// Fe II a⁶D 3d⁶(⁵D)4s, ground level a⁶D₉/₂ (NIST ASD, from memory); two open subshells.
+		const s = termSheet('3d6 4s');
+		const sextet = s.terms.find((t) => t.label === '6D')!;
+		expect(sextet.display).toBe('⁶D');
+		expect(sextet.parentage).toEqual([
+			{
+				parents: [
+					{ subshell: '3d6', S: '2', L: 2, seniority: 4 },
+					{ subshell: '4s', S: '1/2', L: 0, seniority: 1 }
+				],
+				intermediates: [
+					{ S: '2', L: 2 },
+					{ S: '5/2', L: 2 }
+				],
+				label: '3d⁶(⁵D)4s ⁶D'
+			}
+		]);
+		expect(s.terms.every((t) => t.parentage!.length === t.count)).toBe(true);
+		expect(s.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
+		expect(s.hund).toMatchObject({ display: '⁶D₉/₂', kind: 'lowest', phrase: "lowest level by Hund's rules (heuristic)" });
+	});
+
+	it('odd configurations mark every display label with °: 2p3 gives ⁴S° ²D° ²P°', () => {
+		// p³ terms ²P ²D ⁴S (Condon & Shortley 1935), odd parity; N I ground ⁴S°₃/₂ (NIST ASD).
+		const s = termSheet('2p3');
+		expect(s.terms.map((t) => t.display)).toEqual(['²P°', '²D°', '⁴S°']);
+		expect(s.hund).toMatchObject({ display: '⁴S°₃/₂', kind: 'ground' });
+	});
+
+	it('typed parents mark the occurrences built on them', () => {
+		const s = termSheet('3d6(5D) 4s');
+		const on = s.terms.flatMap((t) => t.parentage!.filter((p) => p.onTypedParents).map((p) => p.label));
+		expect(on.sort()).toEqual(['3d⁶(⁵D)4s ⁴D', '3d⁶(⁵D)4s ⁶D']);
+	});
+
+	it('over the parentage limit the field is left out and the status says why', () => {
+		const s = termSheet('4f6 5d4');
+		expect(s.terms[0]).not.toHaveProperty('parentage');
+		expect(s.parentageStatus.listed).toBe(false);
+		expect(s.parentageStatus.omitted).toMatch(/at most 5000 term occurrences; this configuration has 16792/);
+	});
+});

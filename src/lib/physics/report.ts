@@ -12,7 +12,9 @@ import { formatConfiguration, parseConfiguration, subshellLabel } from './parse'
 import { countAt, microstateGrid, microstateTotal, type MicrostateGrid } from './microstates';
 import { levelsOf, statisticalWeight, termLabel, termsOf } from './terms';
 import { fractionString, GS_FREE_ELECTRON, landeG } from './lande';
-import { HUND_CAUTION, hundGround, hundOrder } from './hund';
+import { HUND_CAUTION, hundGround, hundOrder, hundWording } from './hund';
+import { levelDisplay, termDisplay } from './display';
+import { parentageItems, type ParentageItem, type ParentageStatus } from './parentageReport';
 
 export type CountValue = number | string;
 
@@ -26,8 +28,12 @@ export interface TermSheetLevel {
 }
 
 export interface TermSheetTerm {
-	/** "4F"; odd parity is marked by `parity`, not in the label. */
+	/** "4F"; odd parity is marked by `parity`, not in the label (a machine key). */
 	label: string;
+	/** The person-facing label with ° where odd: "⁴F°". */
+	display: string;
+	/** One item per occurrence with its parent terms (omitted over the limit: see `parentageStatus`). */
+	parentage?: ParentageItem[];
 	S: string;
 	L: number;
 	letter: string;
@@ -61,7 +67,22 @@ export interface TermSheet {
 	weightSum: CountValue;
 	gs: { value: number; exact: boolean };
 	terms: TermSheetTerm[];
-	hund: { term: string; J: string; level: string; rigorous: boolean; reason: string; caution: string };
+	/** Whether `parentage` is listed on the terms, and why not. */
+	parentageStatus: ParentageStatus;
+	hund: {
+		term: string;
+		J: string;
+		level: string;
+		/** "⁹D°₂". */
+		display: string;
+		rigorous: boolean;
+		reason: string;
+		caution: string;
+		/** 'ground' or 'lowest', and the words to use: "lowest level by Hund's rules (heuristic)". */
+		kind: 'ground' | 'lowest';
+		phrase: string;
+		why: string;
+	};
 	grid: { ML: number[]; MS: string[]; counts: CountValue[][] };
 }
 
@@ -93,6 +114,11 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 	const rank = new Map(order.map((t, i) => [`${t.term.twoS}|${t.term.L}`, { rank: i + 1, twoJs: t.twoJs }]));
 	const ground = hundGround(cfg);
 	const grid = microstateGrid(cfg);
+	const odd = cfg.parity === 'odd';
+	const parentage = parentageItems(
+		cfg,
+		terms.reduce((a, t) => a + t.count, 0)
+	);
 
 	let weightSum = 0n;
 	let levelCount = 0;
@@ -109,6 +135,8 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 		const r = rank.get(`${t.twoS}|${t.L}`)!;
 		return {
 			label: termLabel(t),
+			display: termDisplay(t.twoS, t.L, odd),
+			...(parentage.status.listed ? { parentage: parentage.byTerm.get(`${t.twoS}|${t.L}`) ?? [] } : {}),
 			S: halfString(t.twoS),
 			L: t.L,
 			letter: termLetter(t.L),
@@ -145,13 +173,16 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 		weightSum: count(weightSum),
 		gs: { value: free ? GS_FREE_ELECTRON : 2, exact: !free },
 		terms: rows,
+		parentageStatus: parentage.status,
 		hund: {
 			term: groundLabel,
 			J: halfString(ground.twoJ),
 			level: groundLabel + halfString(ground.twoJ),
+			display: levelDisplay(ground.term.twoS, ground.term.L, ground.twoJ, odd),
 			rigorous: ground.rigorous,
 			reason: ground.reason,
-			caution: HUND_CAUTION
+			caution: HUND_CAUTION,
+			...hundWording(cfg)
 		},
 		grid: gridRows(grid)
 	};

@@ -22,6 +22,27 @@ export interface Configuration {
 	parity: 'even' | 'odd';
 	/** The noble-gas core the user typed, e.g. "Ar", if any (already expanded in `subshells`). */
 	core: string | null;
+	/** Parent terms typed after subshells, `3d6(5D) 4s` (see parse.ts); absent when none were typed. */
+	parents?: ParentSpec[];
+}
+
+/** A term typed in parentheses: ⁵D is { twoS: 4, L: 2 }; `v=4` sets the seniority, `#2` the index. */
+export interface TermSpec {
+	twoS: number;
+	L: number;
+	seniority: number | null;
+	index: number | null;
+}
+
+/**
+ * What was typed in parentheses after one subshell: its own term (`3d6(5D)`) and/or the
+ * intermediate term after coupling up to it (`4s(7S)` after 3d5(6S)).
+ */
+export interface ParentSpec {
+	n: number;
+	l: number;
+	own: TermSpec | null;
+	intermediate: TermSpec | null;
 }
 
 /** An LS term ^{2S+1}L, possibly occurring several times in a configuration. */

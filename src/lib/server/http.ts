@@ -8,6 +8,7 @@ import { ServiceError } from './errors';
 import { actorForToken } from './services/tokens';
 import { ConfigurationError } from '../physics/parse';
 import { SpeciesError } from '../physics/elements';
+import type { ApiResponses, RouteKey, Sendable } from '../api/types';
 
 /** The signed-in user, or a redirect to the sign-in page that comes back here. */
 export function requireUser(event: RequestEvent): Actor {
@@ -54,6 +55,14 @@ export async function forAction<T, E extends Record<string, unknown> = Record<ne
 /** One JSON error shape for the whole API: `{ "error": { "message", ...details } }`. */
 export function jsonError(status: number, message: string, details: Record<string, unknown> = {}) {
 	return json({ error: { message, ...details } }, { status });
+}
+
+/**
+ * A JSON answer whose body is checked, at compile time, against the route's type in
+ * src/lib/api/types.ts: `reply('GET /api/v1/terms', sheet)`.
+ */
+export function reply<K extends RouteKey>(_route: K, body: Sendable<ApiResponses[K]>, init?: ResponseInit): Response {
+	return json(body, init);
 }
 
 /** Wraps a JSON handler so every failure answers in the API's error shape. */

@@ -1,19 +1,12 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
+import { API_ROUTES } from '$lib/api/routes';
+import { api, reply } from '$lib/server/http';
 
-/** A small index so scripts can discover the API. */
-export const GET: RequestHandler = () =>
-	json({
+/** The index, generated from the one route list (src/lib/api/routes.ts), so scripts can discover the API. */
+export const GET: RequestHandler = api(() =>
+	reply('GET /api/v1', {
 		name: 'Termwright API',
 		version: 1,
-		endpoints: [
-			'GET /api/v1/terms?config=',
-			'GET /api/v1/jj?config=',
-			'GET /api/v1/wigner?symbol=3j|6j|9j|cg&args=',
-			'GET|POST /api/v1/projects',
-			'GET|PATCH|DELETE /api/v1/projects/:projectId',
-			'GET|POST /api/v1/projects/:projectId/members',
-			'GET|POST /api/v1/projects/:projectId/shelf',
-			'GET|PATCH|DELETE /api/v1/projects/:projectId/shelf/:entryId'
-		]
-	});
+		routes: API_ROUTES.map((r) => ({ method: r.method, path: r.path, summary: r.summary, access: r.access }))
+	})
+);

@@ -1,10 +1,9 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { couplingTable, MAX_J_COUPLING_TABLE } from '$lib/physics/basis';
 import { ServiceError } from '$lib/server/errors';
 import { exactJson } from '$lib/physics/exact';
 import { halfString, parseHalf } from '$lib/physics/half';
-import { api, queryParam } from '$lib/server/http';
+import { api, queryParam, reply } from '$lib/server/http';
 
 /** Coupled ↔ uncoupled table of j1 ⊗ j2 with exact coefficients: `?j1=1&j2=1/2` (each ≤ 10). */
 function momentum(text: string, name: string): number {
@@ -21,7 +20,7 @@ function momentum(text: string, name: string): number {
 
 export const GET: RequestHandler = api((event) => {
 	const t = couplingTable(momentum(queryParam(event, 'j1', 10), 'j1'), momentum(queryParam(event, 'j2', 10), 'j2'));
-	return json({
+	return reply('GET /api/v1/basis', {
 		j1: halfString(t.tj1),
 		j2: halfString(t.tj2),
 		coupled: t.rows.map((r) => ({

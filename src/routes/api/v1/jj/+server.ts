@@ -1,11 +1,10 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { parseConfiguration, formatConfiguration } from '$lib/physics/parse';
 import { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from '$lib/physics/jj';
 import { ServiceError } from '$lib/server/errors';
 import { levelCountsByJ } from '$lib/physics/terms';
 import { halfString } from '$lib/physics/half';
-import { api, queryParam } from '$lib/server/http';
+import { api, queryParam, reply } from '$lib/server/http';
 
 /**
  * jj-coupled levels of a configuration, one entry per level: `?config=2p5 3p`.
@@ -18,7 +17,7 @@ export const GET: RequestHandler = api((event) => {
 	assertLsJjAgree(levelCountsByJ(cfg), jjCounts);
 	const countsByJ = Object.fromEntries([...jjCounts.entries()].sort((a, b) => a[0] - b[0]).map(([tj, n]) => [halfString(tj), n]));
 	if (event.url.searchParams.get('counts') === 'only')
-		return json({ configuration: formatConfiguration(cfg), countsByJ, countsAgreeWithLS: true });
+		return reply('GET /api/v1/jj', { configuration: formatConfiguration(cfg), countsByJ, countsAgreeWithLS: true });
 	const total = [...jjCounts.values()].reduce((a, b) => a + b, 0);
 	if (total > MAX_JJ_LEVELS)
 		throw new ServiceError(
@@ -33,5 +32,5 @@ export const GET: RequestHandler = api((event) => {
 		pieces: lv.labelPieces,
 		intermediates: lv.intermediates.map(halfString)
 	}));
-	return json({ configuration: formatConfiguration(cfg), levels, countsByJ, countsAgreeWithLS: true });
+	return reply('GET /api/v1/jj', { configuration: formatConfiguration(cfg), levels, countsByJ, countsAgreeWithLS: true });
 });

@@ -1,9 +1,8 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { parseConfiguration, subshellLabel } from '$lib/physics/parse';
 import { listMicrostates } from '$lib/physics/listing';
 import { halfString } from '$lib/physics/half';
-import { api, queryParam } from '$lib/server/http';
+import { api, queryParam, reply } from '$lib/server/http';
 import { ServiceError } from '$lib/server/errors';
 
 const MAX_PAGE = 500;
@@ -20,7 +19,7 @@ export const GET: RequestHandler = api((event) => {
 	if (!/^\d{1,3}$/.test(limitText) || Number(limitText) > MAX_PAGE)
 		throw new ServiceError(400, `limit must be a whole number from 0 to ${MAX_PAGE}`);
 	const page = listMicrostates(cfg, { offset: BigInt(offsetText), limit: Number(limitText) });
-	return json({
+	return reply('GET /api/v1/microstates', {
 		total: page.total.toString(),
 		offset: page.offset.toString(),
 		subshells: page.subshells.map((s) => subshellLabel(s)),

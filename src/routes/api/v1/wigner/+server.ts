@@ -1,7 +1,6 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { evaluateSymbol, MAX_J_SYMBOL, MAX_J_9J } from '$lib/physics/wigner';
-import { api, queryParam } from '$lib/server/http';
+import { api, queryParam, reply } from '$lib/server/http';
 import { ServiceError } from '$lib/server/errors';
 
 const KINDS = ['3j', '6j', '9j', 'cg'] as const;
@@ -18,5 +17,5 @@ export const GET: RequestHandler = api((event) => {
 		.split(',')
 		.map((s) => s.trim());
 	const v = evaluateSymbol(symbol as (typeof KINDS)[number], args);
-	return json({ symbol, args, value: v.value, exact: v.exact, text: v.text });
+	return reply('GET /api/v1/wigner', { symbol: v.kind, args, value: v.value, exact: v.exact, text: v.text });
 });

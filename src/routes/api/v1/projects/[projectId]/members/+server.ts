@@ -1,11 +1,16 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { addMember, listMembers } from '$lib/server/services/projects';
-import { api, apiActor, readJson } from '$lib/server/http';
+import { api, apiActor, readJson, reply } from '$lib/server/http';
 
-export const GET: RequestHandler = api((event) => json({ members: listMembers(apiActor(event), event.params.projectId) }));
+export const GET: RequestHandler = api((event) =>
+	reply('GET /api/v1/projects/:projectId/members', { members: listMembers(apiActor(event), event.params.projectId) })
+);
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return json({ member: addMember(actor, event.params.projectId, await readJson(event)) }, { status: 201 });
+	return reply(
+		'POST /api/v1/projects/:projectId/members',
+		{ member: addMember(actor, event.params.projectId, await readJson(event)) },
+		{ status: 201 }
+	);
 });

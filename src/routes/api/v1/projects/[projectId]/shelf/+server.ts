@@ -1,14 +1,20 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { createEntry, listEntries } from '$lib/server/services/shelf';
-import { api, apiActor, readJson } from '$lib/server/http';
+import { api, apiActor, readJson, reply } from '$lib/server/http';
 
 /** One page of the Shelf: `?limit=1…200` (default 50), `&cursor=` the `nextCursor` of the page before, `&q=` filter text. */
 export const GET: RequestHandler = api((event) =>
-	json(listEntries(apiActor(event), event.params.projectId, Object.fromEntries(event.url.searchParams)))
+	reply(
+		'GET /api/v1/projects/:projectId/shelf',
+		listEntries(apiActor(event), event.params.projectId, Object.fromEntries(event.url.searchParams))
+	)
 );
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return json({ entry: createEntry(actor, event.params.projectId, await readJson(event)) }, { status: 201 });
+	return reply(
+		'POST /api/v1/projects/:projectId/shelf',
+		{ entry: createEntry(actor, event.params.projectId, await readJson(event)) },
+		{ status: 201 }
+	);
 });

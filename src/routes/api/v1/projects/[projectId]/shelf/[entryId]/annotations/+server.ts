@@ -1,10 +1,11 @@
-import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { deleteAnnotation, listAnnotations, saveAnnotation } from '$lib/server/services/annotations';
-import { api, apiActor, queryParam, readJson } from '$lib/server/http';
+import { api, apiActor, queryParam, readJson, reply } from '$lib/server/http';
 
 export const GET: RequestHandler = api((event) =>
-	json({ annotations: listAnnotations(apiActor(event), event.params.projectId, event.params.entryId) })
+	reply('GET /api/v1/projects/:projectId/shelf/:entryId/annotations', {
+		annotations: listAnnotations(apiActor(event), event.params.projectId, event.params.entryId)
+	})
 );
 
 /**
@@ -13,7 +14,9 @@ export const GET: RequestHandler = api((event) =>
  */
 export const PUT: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return json({ annotation: saveAnnotation(actor, event.params.projectId, event.params.entryId, await readJson(event)) });
+	return reply('PUT /api/v1/projects/:projectId/shelf/:entryId/annotations', {
+		annotation: saveAnnotation(actor, event.params.projectId, event.params.entryId, await readJson(event))
+	});
 });
 
 /** `?level=<levelKey>` */

@@ -1,0 +1,65 @@
+/**
+ * Every /api/v1 route, in one list: the `/api/v1` index is generated from it, `reply` in
+ * $lib/server/http type-checks each handler's body against ./types by its key, and
+ * routes.test.ts fails when a `+server.ts` exports a method that is not listed here (or the
+ * other way round), so the index cannot drift from the code.
+ */
+import type { RouteKey } from './types';
+
+export type HttpMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+/** Who may call a route: `public` needs no sign-in; the project roles are the least role needed. */
+export type RouteAccess = 'public' | 'signed-in' | 'viewer' | 'editor' | 'owner';
+
+export interface ApiRoute {
+	method: HttpMethod;
+	path: string;
+	summary: string;
+	access: RouteAccess;
+}
+
+type Listed = { [K in RouteKey]: { summary: string; access: RouteAccess } };
+
+const LISTED: Listed = {
+	'GET /api/v1': { summary: 'this index', access: 'public' },
+	'GET /api/v1/terms': { summary: 'Term sheet: ?config=3d5 4s[&gs=free]', access: 'public' },
+	'GET /api/v1/jj': { summary: 'jj-coupled levels: ?config=2p5 3p[&counts=only]', access: 'public' },
+	'GET /api/v1/bridge': { summary: 'LS ↔ jj correlation by J: ?config=2p 3p', access: 'public' },
+	'GET /api/v1/basis': { summary: 'coupled ⇄ uncoupled table: ?j1=2&j2=1/2', access: 'public' },
+	'GET /api/v1/wigner': { summary: 'Wigner 3j/6j/9j or Clebsch–Gordan: ?symbol=6j&args=1,1,1,1,1,1', access: 'public' },
+	'GET /api/v1/species': { summary: 'ground configuration of an atom or ion: ?name=Fe II', access: 'public' },
+	'GET /api/v1/microstates': { summary: 'explicit microstates, a page at a time: ?config=2p2&offset=0&limit=50', access: 'public' },
+	'GET /api/v1/projects': { summary: 'your projects', access: 'signed-in' },
+	'POST /api/v1/projects': { summary: 'create a project { name, description }', access: 'signed-in' },
+	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
+	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
+	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },
+	'GET /api/v1/projects/:projectId/members': { summary: 'members and their roles', access: 'viewer' },
+	'POST /api/v1/projects/:projectId/members': { summary: 'add a member { email, role }', access: 'owner' },
+	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf, a page at a time: ?limit=50&cursor=&q=', access: 'viewer' },
+	'POST /api/v1/projects/:projectId/shelf': { summary: 'add a configuration to the Shelf', access: 'editor' },
+	'GET /api/v1/projects/:projectId/shelf/:entryId': { summary: 'one Shelf entry', access: 'viewer' },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { summary: 'change an entry; send the version you read', access: 'editor' },
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId': { summary: 'delete an entry', access: 'editor' },
+	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'per-level notes', access: 'viewer' },
+	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'create or change one level note', access: 'editor' },
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'delete one level note: ?level=', access: 'editor' },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': {
+		summary: 'reattach a (detached) note to a level { levelKey, version }',
+		access: 'editor'
+	},
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': {
+		summary: 'delete one note, attached or detached',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' }
+};
+
+/** The routes in the order listed, as plain data. */
+export const API_ROUTES: readonly ApiRoute[] = Object.entries(LISTED).map(([key, info]) => {
+	const [method, path] = key.split(' ') as [HttpMethod, string];
+	return { method, path, ...info };
+});
+
+/** "GET /api/v1/projects/:projectId" for a route. */
+export const routeKey = (r: Pick<ApiRoute, 'method' | 'path'>) => `${r.method} ${r.path}`;

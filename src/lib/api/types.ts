@@ -1,0 +1,187 @@
+/**
+ * The JSON bodies of the /api/v1 routes: one definition, used by the `+server.ts` handlers (through
+ * `reply` in $lib/server/http) and by the pages (through `apiGet` in ./client). Nothing here runs.
+ *
+ * Conventions: half-integers are strings ("3/2"); dates are ISO strings; counts that can pass 2^53
+ * are strings of digits; every error is `ApiErrorBody`.
+ */
+import type { TermSheet } from '$lib/physics/report';
+import type { ExactJson } from '$lib/physics/exact';
+import type { JjLabelPiece } from '$lib/physics/jj';
+
+/** Every failure: status 4xx/5xx with this body. */
+export interface ApiErrorBody {
+	error: { message: string; token?: string; field?: string; [detail: string]: unknown };
+}
+
+// ---------------------------------------------------------------- compute routes (public)
+
+/** `gs` of /api/v1/terms: g_s = 2 (exact fractions) or the free-electron value. */
+export type GsChoice = 'exact' | 'free';
+
+export type TermsResponse = TermSheet;
+
+export interface JjLevelJson {
+	J: string;
+	group: string;
+	subshells: string;
+	label: string;
+	pieces: JjLabelPiece[];
+	intermediates: string[];
+}
+
+export interface JjResponse {
+	configuration: string;
+	/** Number of jj levels of each J ("3/2" → 4). */
+	countsByJ: Record<string, number>;
+	countsAgreeWithLS: true;
+	/** Left out with `counts=only`. */
+	levels?: JjLevelJson[];
+}
+
+export interface BridgeResponse {
+	configuration: { notation: string; pretty: string; parity: 'even' | 'odd' };
+	schematic: boolean;
+	ls: { label: string; J: string }[];
+	jj: { label: string; J: string; group: string; subshells: string; spinOrbitWeight: number }[];
+	links: { J: string; ls: number; jj: number }[];
+}
+
+/** An exact coefficient sign·√(p/q) with its float value and a plain-text form ("-sqrt(1/3)"). */
+export type ExactCoefficient = ExactJson;
+
+export interface BasisResponse {
+	j1: string;
+	j2: string;
+	coupled: { J: string; M: string; components: { m1: string; m2: string; coefficient: ExactCoefficient }[] }[];
+	uncoupled: { m1: string; m2: string; components: { J: string; M: string; coefficient: ExactCoefficient }[] }[];
+}
+
+export interface WignerResponse {
+	symbol: '3j' | '6j' | '9j' | 'cg';
+	args: string[];
+	value: number;
+	exact: { sign: -1 | 0 | 1; squared: string };
+	text: string;
+}
+
+export interface SpeciesResponse {
+	species: { Z: number; symbol: string; name: string; charge: number; label: string };
+	notation: string;
+	source: string;
+	caution: string | null;
+}
+
+export interface MicrostatesResponse {
+	/** Digits: the total can pass 2^53. */
+	total: string;
+	offset: string;
+	subshells: string[];
+	items: { index: string; ML: number; MS: string; orbitals: string[][] }[];
+}
+
+// ---------------------------------------------------------------- project routes (members)
+
+export type ProjectRoleName = 'viewer' | 'editor' | 'owner';
+
+export interface ProjectJson {
+	id: string;
+	name: string;
+	description: string;
+	role: ProjectRoleName;
+	createdBy?: string | null;
+	createdAt?: string;
+	updatedAt: string;
+}
+
+export interface ProjectListItem extends ProjectJson {
+	members: number;
+}
+
+export interface MemberJson {
+	userId: string;
+	name: string;
+	email: string;
+	role: ProjectRoleName;
+	since?: string;
+}
+
+export interface ShelfEntryJson {
+	id: string;
+	projectId: string;
+	title: string;
+	species: string;
+	notation: string;
+	notes: string;
+	tags: string[];
+	version: number;
+	createdAt: string;
+	updatedAt: string;
+	updatedBy: string | null;
+	/** Checks that do not stop a save, e.g. species and configuration disagreeing on the electron count. */
+	warnings: string[];
+}
+
+export interface AnnotationJson {
+	id: string;
+	levelKey: string;
+	observedEnergy: number | null;
+	/** The digits as typed ("1880", "19500.12345", "-12400"); show and export these, not the number. */
+	observedEnergyText: string | null;
+	uncertainty: number | null;
+	uncertaintyText: string | null;
+	status: 'proposed' | 'confirmed' | 'disputed';
+	comment: string;
+	/** True when the entry's configuration changed after the note was written; reattach or delete it. */
+	detached: boolean;
+	/** The configuration (as typed) a detached note was written for. */
+	detachedFrom: string | null;
+	version: number;
+	updatedAt: string;
+	updatedBy: string | null;
+}
+
+/**
+ * The response body of each route, keyed "METHOD /path" exactly as in `API_ROUTES` (./routes).
+ * Routes that answer 204 or a file map to `null`.
+ */
+export interface ApiResponses {
+	'GET /api/v1': { name: string; version: 1; routes: { method: string; path: string; summary: string; access: string }[] };
+	'GET /api/v1/terms': TermsResponse;
+	'GET /api/v1/jj': JjResponse;
+	'GET /api/v1/bridge': BridgeResponse;
+	'GET /api/v1/basis': BasisResponse;
+	'GET /api/v1/wigner': WignerResponse;
+	'GET /api/v1/species': SpeciesResponse;
+	'GET /api/v1/microstates': MicrostatesResponse;
+	'GET /api/v1/projects': { projects: ProjectListItem[] };
+	'POST /api/v1/projects': { project: ProjectJson };
+	'GET /api/v1/projects/:projectId': { project: ProjectJson };
+	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
+	'DELETE /api/v1/projects/:projectId': null;
+	'GET /api/v1/projects/:projectId/members': { members: MemberJson[] };
+	'POST /api/v1/projects/:projectId/members': { member: MemberJson };
+	'GET /api/v1/projects/:projectId/shelf': { entries: Omit<ShelfEntryJson, 'warnings'>[]; nextCursor: string | null };
+	'POST /api/v1/projects/:projectId/shelf': { entry: ShelfEntryJson };
+	'GET /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson; detachedNotes: number };
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId': null;
+	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotations: AnnotationJson[] };
+	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotation: AnnotationJson };
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': null;
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': { annotation: AnnotationJson };
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': null;
+	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': null;
+}
+
+export type RouteKey = keyof ApiResponses;
+
+/** Date fields as the server holds them before JSON turns them into ISO strings. */
+type DateKeys = 'createdAt' | 'updatedAt' | 'since' | 'lastUsedAt' | 'expiresAt';
+
+/** What a handler may pass for a body of type T: the same, but with Date objects where the JSON has dates. */
+export type Sendable<T> = T extends (infer U)[]
+	? Sendable<U>[]
+	: T extends object
+		? { [K in keyof T]: K extends DateKeys ? T[K] | Date : Sendable<T[K]> }
+		: T;
