@@ -11,11 +11,11 @@ test.describe('GET /api/v1/terms', () => {
 		expect(res.status()).toBe(200);
 		const body = await res.json();
 		expect(body.configuration).toMatchObject({ electrons: 21, parity: 'even' });
-		expect(body.microstates).toBe(120); // C(10,3) = 120
-		const summary = body.terms.map((t: { label: string; count: number }) => t.label + (t.count > 1 ? `(${t.count})` : '')).sort();
+		expect(body.microstates).toBe('120'); // C(10,3) = 120; every count is an exact decimal string
+		const summary = body.terms.map((t: { label: string; count: string }) => t.label + (t.count !== '1' ? `(${t.count})` : '')).sort();
 		expect(summary).toEqual(['2D(2)', '2F', '2G', '2H', '2P', '4F', '4P']);
 		const f4 = body.terms.find((t: { label: string }) => t.label === '4F');
-		expect(f4).toMatchObject({ S: '3/2', L: 3, count: 1, seniority: 3, weight: 28 });
+		expect(f4).toMatchObject({ S: '3/2', L: 3, count: '1', seniority: 3, seniorities: [{ seniority: 3, count: '1' }], weight: 28 });
 		// g(⁴F₃/₂) = 2/5 (Landé formula with g_s = 2).
 		expect(f4.levels[0]).toEqual({ J: '3/2', g: '2/5', gDecimal: 0.4, weight: 4 });
 		expect(body.hund).toMatchObject({ term: '4F', J: '3/2', rigorous: true });
@@ -27,6 +27,17 @@ test.describe('GET /api/v1/terms', () => {
 		const body = await res.json();
 		expect(body.error.token).toBe('2p7');
 		expect(body.error.message).toMatch(/at most 6/);
+	});
+
+	test('12o23 and 10m19-sized requests are answered at once: over the budget is a 400 stating the limit', async ({ request }) => {
+		// Regression: 12o23 once grew the server's heap past 4 GB.
+		const res = await request.get('/api/v1/terms?config=12o23');
+		expect(res.status()).toBe(400);
+		expect((await res.json()).error.message).toMatch(/over the limit of 15000/);
+		const ok = await request.get('/api/v1/terms?config=10m19');
+		expect(ok.status()).toBe(200);
+		// C(38,19) = 35 345 263 800 microstates (combinatorics).
+		expect((await ok.json()).microstates).toBe('35345263800');
 	});
 
 	test('over-long input is refused with the limit', async ({ request }) => {
@@ -128,4 +139,46 @@ test('GET /api/v1/jj refuses to list over 20000 levels and counts them by J inst
 		return sum + (twoJ + 1) * n;
 	}, 0);
 	expect(states).toBe(926640);
+});
+
+test.describe('labels: parentage and jK', () => {
+	test('GET /api/v1/terms?config=3d6 4s gives each term its parentage and a display label', async ({ request }) => {
+		// Fe II a⁶D 3d⁶(⁵D)4s (NIST ASD, from memory); 24 term occurrences (d⁶ terms × s, Condon & Shortley 1935).
+		const body = await (await request.get('/api/v1/terms?config=' + encodeURIComponent('3d6 4s'))).json();
+		const sextet = body.terms.find((t: { label: string }) => t.label === '6D');
+		expect(sextet.display).toBe('⁶D');
+		expect(sextet.parentage[0]).toEqual({
+			parents: [
+				{ subshell: '3d6', S: '2', L: 2, seniority: 4 },
+				{ subshell: '4s', S: '1/2', L: 0, seniority: 1 }
+			],
+			intermediates: [
+				{ S: '2', L: 2 },
+				{ S: '5/2', L: 2 }
+			],
+			label: '3d⁶(⁵D)4s ⁶D'
+		});
+		expect(body.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
+		expect(body.hund.phrase).toBe("lowest level by Hund's rules (heuristic)");
+	});
+
+	test('GET /api/v1/jk?config=2p5 3p lists ten levels starting on the ²P°₃/₂ core', async ({ request }) => {
+		// Cowan (1981) sec. 4.12, 2p⁵3p in pair coupling (from memory).
+		const res = await request.get('/api/v1/jk?config=' + encodeURIComponent('2p5 3p'));
+		expect(res.status()).toBe(200);
+		const body = await res.json();
+		expect(body.levels).toHaveLength(10);
+		expect(body.levels).toContainEqual({
+			core: { S: '1/2', L: 1, J: '3/2', occurrence: 1, parentage: '2p⁵ ²P°' },
+			K: '5/2',
+			J: '3',
+			label: '2p⁵(²P°₃/₂)3p ²[5/2]₃'
+		});
+	});
+
+	test('GET /api/v1/jk answers 400 with the reason where jK does not apply', async ({ request }) => {
+		const res = await request.get('/api/v1/jk?config=2p2');
+		expect(res.status()).toBe(400);
+		expect((await res.json()).error.message).toMatch(/jK coupling needs one outer electron/);
+	});
 });

@@ -13,7 +13,7 @@ describe('level keys', () => {
 
 	it('one key per level and occurrence: d³ ²D (twice) gives 4 keys', () => {
 		// ²D occurs twice in d³ (Condon & Shortley), each with J = 3/2, 5/2.
-		const refs = levelRefs([{ label: '2D', count: 2, levels: [{ J: '3/2' }, { J: '5/2' }] }]);
+		const refs = levelRefs([{ label: '2D', count: '2', levels: [{ J: '3/2' }, { J: '5/2' }] }]);
 		expect(refs.map(levelKey)).toEqual(['2D#1|3/2', '2D#1|5/2', '2D#2|3/2', '2D#2|5/2']);
 	});
 });

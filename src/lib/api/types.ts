@@ -39,6 +39,23 @@ export interface JjResponse {
 	levels?: JjLevelJson[];
 }
 
+export interface JkLevelJson {
+	core: { S: string; L: number; J: string; occurrence: number; parentage: string };
+	K: string;
+	J: string;
+	/** "2p⁵(²P°₃/₂)3p ²[5/2]₃". */
+	label: string;
+}
+
+export interface JkResponse {
+	configuration: { notation: string; pretty: string; parity: 'even' | 'odd'; core: string; outer: string };
+	levels: JkLevelJson[];
+	/** Number of levels of each J ("2" → 3); equal to LS (checked). */
+	countsByJ: Record<string, number>;
+	countsAgreeWithLS: true;
+	schematic: true;
+}
+
 export interface BridgeResponse {
 	configuration: { notation: string; pretty: string; parity: 'even' | 'odd' };
 	schematic: boolean;
@@ -149,6 +166,7 @@ export interface ApiResponses {
 	'GET /api/v1': { name: string; version: 1; routes: { method: string; path: string; summary: string; access: string }[] };
 	'GET /api/v1/terms': TermsResponse;
 	'GET /api/v1/jj': JjResponse;
+	'GET /api/v1/jk': JkResponse;
 	'GET /api/v1/bridge': BridgeResponse;
 	'GET /api/v1/basis': BasisResponse;
 	'GET /api/v1/wigner': WignerResponse;

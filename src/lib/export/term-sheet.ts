@@ -10,7 +10,8 @@ export interface LevelRow {
 	letter: string;
 	S: string;
 	L: number;
-	count: number;
+	/** How often the term occurs, exact decimal digits. */
+	count: string;
 	seniority: string;
 	parity: 'even' | 'odd';
 	J: string;
@@ -18,6 +19,14 @@ export interface LevelRow {
 	gDecimal: number | null;
 	weight: number;
 	hundRank: number;
+}
+
+/**
+ * Seniorities as people read them: "1, 3" for two occurrences with v = 1 and v = 3, and a count
+ * where several occurrences share one v: "1, 3 (2×)".
+ */
+export function senioritySummary(list: readonly { seniority: number; count: string }[]): string {
+	return list.map((s) => (s.count === '1' ? String(s.seniority) : `${s.seniority} (${s.count}×)`)).join(', ');
 }
 
 export function levelRows(sheet: TermSheet): LevelRow[] {
@@ -29,7 +38,7 @@ export function levelRows(sheet: TermSheet): LevelRow[] {
 			S: t.S,
 			L: t.L,
 			count: t.count,
-			seniority: t.seniorities ? t.seniorities.join(',') : '',
+			seniority: t.seniorities ? senioritySummary(t.seniorities) : '',
 			parity: sheet.configuration.parity,
 			J: lv.J,
 			g: lv.g,

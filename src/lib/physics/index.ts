@@ -29,6 +29,7 @@ export { termDisplay, levelDisplay } from './display';
 export { parentageOf, onTypedParents, MAX_PARENTAGE_OCCURRENCES, type ParentagePath } from './parentage';
 export { listMicrostates, iterateMicrostates } from './listing';
 export { termsByEnumeration } from './enumerate';
+export { jkLevels, jkSplit, jkLevelCountsByJ, JkNotApplicable, MAX_JK_LEVELS, type JkLevel } from './jk';
 export { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from './jj';
 export {
 	wigner3j,
@@ -45,3 +46,52 @@ export { exactToNumber, exactString, exactSquaredString, exactJson, type ExactSq
 export { couplingTable, MAX_J_COUPLING_TABLE } from './basis';
 export { couplingBridge, jjSpinOrbitWeight } from './bridge';
 export { termSheet, type TermSheet } from './report';
+export { intermediateLevels, MODEL_ENERGY_CAUTION, type IcLevel, type IcResult } from './levels-ic';
+export { couplingSweep, SWEEP_POINTS, type SweepResult } from './sweep';
+export { fitParameters, MAX_FIT_LEVELS, type FitInput, type FitResult, type ObservedLevel } from './fit';
+export {
+	radialParameters,
+	racahFromSlater,
+	slaterFromRacah,
+	condonShortleyDenominator,
+	type EnergyParameterInput
+} from './slater-parameters';
+export { checkDeterminantBudget, determinantCounts, MAX_BLOCK_DETERMINANTS, MAX_TOTAL_DETERMINANTS } from './determinants';
+export { symmetricEigen } from './symmetric-eigen';
+export {
+	airRefractiveIndex,
+	vacuumToAir,
+	airToVacuum,
+	toVacuumAngstrom,
+	fromVacuumAngstrom,
+	wavenumberOf,
+	vacuumWavelengthOf,
+	listedWavelength,
+	uncertaintyToWavenumber,
+	AIR_WAVELENGTH_LIMIT_A,
+	type SpectralUnit,
+	type Medium
+} from './airvac';
+export { ritzLine, ritzUncertainty, type RitzLine } from './ritz';
+export {
+	jParityAllows,
+	lsVerdict,
+	lsLineStrength,
+	multipletLines,
+	multipletLabel,
+	termSymbol,
+	transitionsBetween,
+	TRANSITION_TYPES,
+	type TransitionType,
+	type SpectralLevel,
+	type Transition
+} from './transitions';
+export {
+	matchLines,
+	matchLinesBruteForce,
+	transitionTable,
+	MAX_MATCH_LEVELS,
+	MAX_MATCH_LINES,
+	MAX_MATCH_TRANSITIONS,
+	type MatchResult
+} from './matcher';

@@ -15,6 +15,7 @@
  */
 import type { Configuration, Subshell } from './types';
 import { asSubshells, openSubshells, subshellCapacity } from './parse';
+import { checkGridBudget } from './budget';
 
 /**
  * Counts of microstates by (M_L, M_S). M_L runs from `minML` = −maxML to `maxML`; 2M_S runs
@@ -47,14 +48,7 @@ interface FlatGrid {
 
 const subshellCache = new Map<string, FlatGrid>();
 
-/**
- * Budget for one grid computation, in multiply-adds of floating-point counts (a BigInt
- * multiply-add is charged BIGINT_COST_FACTOR). About a second of work; the configurations of
- * atomic spectroscopy use a tiny fraction of it (4f7 5d3 6p3 5g2: about 10^4).
- */
-export const MAX_GRID_WORK = 4e8;
-/** Rough cost of a BigInt multiply-add relative to a float one (measured on V8, order of magnitude). */
-export const BIGINT_COST_FACTOR = 25;
+export { MAX_GRID_WORK, BIGINT_COST_FACTOR } from './budget';
 const binomialCache = new Map<string, bigint>();
 
 /**
@@ -252,25 +246,13 @@ const CLOSED: FlatGrid = { maxML: 0, maxTwoMS: 0, big: [1n], small: Float64Array
 function flatGridOf(subshells: readonly Subshell[]): FlatGrid {
 	const open = openSubshells(subshells);
 	if (open.length === 0) return CLOSED;
-	// Smaller grids first keeps the intermediate grids small.
-	const grids = open.map((s) => subshellGridFlat(s.l, s.occupancy)).sort((x, y) => x.big.length - y.big.length);
 	let total = 1n;
 	for (const s of open) total *= binomial(subshellCapacity(s.l), s.occupancy);
 	const exactInFloat = total <= BigInt(Number.MAX_SAFE_INTEGER);
-	let work = 0;
-	let accML = grids[0].maxML;
-	let accMS = grids[0].maxTwoMS;
-	for (let k = 1; k < grids.length; k++) {
-		work += ((2 * accML + 1) * (accMS + 1) * grids[k].big.length) / 4;
-		accML += grids[k].maxML;
-		accMS += grids[k].maxTwoMS;
-	}
-	if (!exactInFloat) work *= BIGINT_COST_FACTOR;
-	if (work > MAX_GRID_WORK) {
-		throw new RangeError(
-			`the configuration is too large to count: about ${work.toExponential(1)} operations, the limit is ${MAX_GRID_WORK.toExponential(0)}; use fewer or less-filled open subshells`
-		);
-	}
+	// Before any grid is built: the estimated work and grid size against the budget.
+	checkGridBudget(open, exactInFloat);
+	// Smaller grids first keeps the intermediate grids small.
+	const grids = open.map((s) => subshellGridFlat(s.l, s.occupancy)).sort((x, y) => x.big.length - y.big.length);
 	let acc = grids[0];
 	for (let k = 1; k < grids.length; k++) acc = convolve(acc, grids[k], exactInFloat);
 	return acc;
@@ -286,8 +268,9 @@ function toGrid(flat: FlatGrid): MicrostateGrid {
 /**
  * The (M_L, M_S) count grid of a configuration (or a list of subshells), by generating
  * functions: per-subshell grids (cached by l and N) convolved together; closed subshells skipped.
- * Throws ConfigurationError for an invalid subshell (see `configurationOf`), RangeError when the
- * convolution would need more than MAX_GRID_WORK operations.
+ * Throws ConfigurationError for an invalid subshell (see `configurationOf`), BudgetError (a
+ * RangeError, ./budget.ts) when the work would exceed MAX_GRID_WORK or the grid MAX_GRID_CELLS —
+ * checked before any grid is built.
  * @example countAt(microstateGrid(parseConfiguration('2p2')), 0, 0) // 5n
  */
 export function microstateGrid(input: Configuration | readonly Subshell[]): MicrostateGrid {

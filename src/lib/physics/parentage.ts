@@ -55,20 +55,25 @@ export interface ParentagePath {
 	intermediates: Intermediate[];
 	/** The person-facing label, "3d⁶(⁵D)4s ⁶D". */
 	label: string;
+	/** The label before the final term, "3d⁶(⁵D)4s" (jK labels put the core level after it). */
+	prefix: string;
+	/** Which of repeated terms of a single open subshell, "v=2"; else ''. */
+	tell: string;
 }
 
 /** The terms of l^N, one entry per occurrence, in Hund order (S, then L descending; v ascending). */
 function subshellTerms(s: Subshell): ParentTerm[] {
 	const out: ParentTerm[] = [];
 	const table = seniorityTable(s.l, s.occupancy);
-	const only = table.length === 1 && table[0].seniorities.length === 1;
+	const occurrences = (entry: (typeof table)[number]) => entry.seniorities.reduce((a, x) => a + x.count, 0);
+	const only = table.length === 1 && occurrences(table[0]) === 1;
 	for (const entry of table) {
-		const repeated = entry.seniorities.length > 1;
-		entry.seniorities.forEach((v, i) => {
-			const sameV = entry.seniorities.filter((x) => x === v).length;
-			const index = sameV > 1 ? entry.seniorities.slice(0, i + 1).filter((x) => x === v).length : null;
-			out.push({ subshell: s, twoS: entry.twoS, L: entry.L, seniority: v, index, repeated, only });
-		});
+		const repeated = occurrences(entry) > 1;
+		// Seniorities come as counts; an index tells apart occurrences that share one seniority.
+		for (const { seniority: v, count } of entry.seniorities) {
+			for (let k = 1; k <= count; k++)
+				out.push({ subshell: s, twoS: entry.twoS, L: entry.L, seniority: v, index: count > 1 ? k : null, repeated, only });
+		}
 	}
 	return out.sort((a, b) => b.twoS - a.twoS || b.L - a.L || a.seniority - b.seniority || (a.index ?? 0) - (b.index ?? 0));
 }
@@ -85,18 +90,19 @@ export function parentTermText(p: ParentTerm): string {
 }
 
 /**
- * The label of one coupling path: the first open subshell with its term in parentheses, each
- * further subshell with its own term when it has more than one, the intermediate term after every
- * subshell but the last, then the final term (° when odd). One open subshell: "3d⁴ ³F (v=2)".
- * @example "3d⁵(⁶S)4s(⁷S)4p ⁸P°"
+ * The parts of a path's label before the final term: the first open subshell with its term in
+ * parentheses, each further subshell with its own term when it has more than one, the intermediate
+ * term after every subshell but the last ("3d⁵(⁶S)4s(⁷S)4p"). With one open subshell the prefix is the
+ * subshell alone and `tell` says which of repeated terms it is ("v=2").
  */
-function pathLabel(open: readonly Subshell[], parents: readonly ParentTerm[], intermediates: readonly Intermediate[]): string {
-	const last = intermediates[intermediates.length - 1];
-	const final = termDisplay(last.twoS, last.L, oddOf(open));
+function pathParts(
+	open: readonly Subshell[],
+	parents: readonly ParentTerm[],
+	intermediates: readonly Intermediate[]
+): { prefix: string; tell: string } {
 	if (open.length === 1) {
 		const p = parents[0];
-		const extra = p.repeated ? ` (v=${p.seniority}${p.index !== null ? `, #${p.index}` : ''})` : '';
-		return `${subshellLabel(open[0], true)} ${final}${extra}`;
+		return { prefix: subshellLabel(open[0], true), tell: p.repeated ? `v=${p.seniority}${p.index !== null ? `, #${p.index}` : ''}` : '' };
 	}
 	let text = '';
 	open.forEach((s, k) => {
@@ -108,7 +114,12 @@ function pathLabel(open: readonly Subshell[], parents: readonly ParentTerm[], in
 			text += `(${termDisplay(im.twoS, im.L, oddOf(open.slice(0, k + 1)))})`;
 		}
 	});
-	return `${text} ${final}`;
+	return { prefix: text, tell: '' };
+}
+
+/** "3d⁵(⁶S)4s(⁷S)4p ⁸P°"; one open subshell: "3d⁴ ³F (v=2)". */
+function pathLabel(prefix: string, tell: string, final: string): string {
+	return `${prefix} ${final}${tell ? ` (${tell})` : ''}`;
 }
 
 /** Paths coupled so far: parents and intermediates of the first k subshells. */
@@ -134,7 +145,7 @@ export function parentageOf(input: Configuration | readonly Subshell[], limit = 
 		throw new RangeError(`this configuration has ${occurrences} term occurrences; parentage is listed for at most ${limit}`);
 	}
 	const open = openSubshells(subshells);
-	if (open.length === 0) return [{ twoS: 0, L: 0, parents: [], intermediates: [], label: termDisplay(0, 0, false) }];
+	if (open.length === 0) return [{ twoS: 0, L: 0, parents: [], intermediates: [], label: termDisplay(0, 0, false), prefix: '', tell: '' }];
 
 	let paths: Partial[] = subshellTerms(open[0]).map((p) => ({ parents: [p], intermediates: [{ twoS: p.twoS, L: p.L }] }));
 	for (let k = 1; k < open.length; k++) {
@@ -158,7 +169,9 @@ export function parentageOf(input: Configuration | readonly Subshell[], limit = 
 		const last = path.intermediates[path.intermediates.length - 1];
 		const key = `${last.twoS}|${last.L}`;
 		const list = byTerm.get(key) ?? [];
-		list.push({ twoS: last.twoS, L: last.L, ...path, label: pathLabel(open, path.parents, path.intermediates) });
+		const { prefix, tell } = pathParts(open, path.parents, path.intermediates);
+		const label = pathLabel(prefix, tell, termDisplay(last.twoS, last.L, oddOf(open)));
+		list.push({ twoS: last.twoS, L: last.L, ...path, label, prefix, tell });
 		byTerm.set(key, list);
 	}
 	const out: ParentagePath[] = [];

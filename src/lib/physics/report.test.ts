@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { termSheet } from './report';
+import { BudgetError } from './budget';
 
 describe('Term sheet', () => {
 	it('3d5 4s: 504 microstates = Σ count·(2S+1)(2L+1), Hund level ⁷S₃ flagged as heuristic', () => {
 		// 504 = C(10,5)·C(2,1) = 252·2 (combinatorics). ⁷S₃ is the ground level of neutral Cr,
 		// 3d⁵4s (NIST/CRC periodic table of ground levels); two open subshells, so not rigorous.
 		const s = termSheet('3d5 4s');
-		expect(s.microstates).toBe(504);
-		expect(s.weightSum).toBe(504);
+		expect(s.microstates).toBe('504');
+		expect(s.weightSum).toBe('504');
 		expect(s.hund).toMatchObject({ level: '7S3', rigorous: false });
 		expect(s.configuration.parity).toBe('even');
 	});
@@ -31,17 +32,20 @@ describe('Term sheet', () => {
 		// M_L = 0, M_S = 0; only (1⁺,1⁻) gives M_L = 2.
 		const { grid } = termSheet('2p2');
 		const at = (ML: number, MS: string) => grid.counts[grid.ML.indexOf(ML)][grid.MS.indexOf(MS)];
-		expect(at(0, '0')).toBe(3);
-		expect(at(2, '0')).toBe(1);
-		expect(at(2, '1')).toBe(0);
-		expect(at(1, '1')).toBe(1);
+		expect(at(0, '0')).toBe('3');
+		expect(at(2, '0')).toBe('1');
+		expect(at(2, '1')).toBe('0');
+		expect(at(1, '1')).toBe('1');
 	});
 
 	it('d3 gives ²D twice with seniorities 1 and 3', () => {
 		// Racah (1943); Condon & Shortley (1935) table of d³ terms: ²D occurs twice (v = 1 and v = 3).
 		const d = termSheet('3d3').terms.find((t) => t.label === '2D')!;
-		expect(d.count).toBe(2);
-		expect([...d.seniorities!].sort()).toEqual([1, 3]);
+		expect(d.count).toBe('2');
+		expect(d.seniorities).toEqual([
+			{ seniority: 1, count: '1' },
+			{ seniority: 3, count: '1' }
+		]);
 		expect(d.seniority).toBeNull();
 	});
 
@@ -57,12 +61,44 @@ describe('Term sheet', () => {
 		expect(termSheet('2p 3d').configuration.parity).toBe('odd');
 	});
 
-	it('reports very large counts as exact decimal strings', () => {
-		// C(14,7)·C(18,9)·C(22,11)·C(26,13)... only the type is checked here; the totals are
-		// checked against binomial products in microstates.test.ts.
-		const s = termSheet('4f7 5g5 6h5');
-		expect(typeof s.microstates === 'number' || /^\d+$/.test(String(s.microstates))).toBe(true);
-		expect(String(s.microstates)).toBe(String(s.weightSum));
+	it('d3 counts 8 terms and 19 levels (Condon & Shortley 1935, table of d³ terms: 2P 2D(2) 2F 2G 2H 4P 4F)', () => {
+		const s = termSheet('3d3');
+		expect(s.termCount).toBe('8');
+		expect(s.levelCount).toBe('19');
+	});
+
+	it('every count is an exact decimal string, also above 2^53', () => {
+		// C(14,7)·C(18,5)·C(22,5)·C(26,3)·C(10,3)·C(6,1) = 1 449 604 113 205 248 000 (combinatorics),
+		// far above 2^53 ≈ 9.0·10^15.
+		const s = termSheet('4f7 5g5 6h5 7i3 6d3 7p');
+		expect(s.microstates).toBe('1449604113205248000');
+		expect(s.weightSum).toBe(s.microstates);
+		const digits = /^\d+$/;
+		for (const v of [s.termCount, s.levelCount, ...s.terms.map((t) => t.count), ...s.grid.counts.flat()]) expect(v).toMatch(digits);
+		// The level total is above 2^53, where a float would have rounded it.
+		expect(BigInt(s.levelCount) > BigInt(Number.MAX_SAFE_INTEGER)).toBe(true);
+	});
+});
+
+describe('Term sheet budget', () => {
+	// Regression: GET /api/v1/terms?config=12o23 once grew the heap past 4 GB. The budget is
+	// checked before any work and the message states the limit.
+	it('12o23 is refused before any work with a message that states the limit', () => {
+		expect(() => termSheet('12o23')).toThrow(BudgetError);
+		expect(() => termSheet('12o23')).toThrow(/over the limit of 15000/);
+	});
+	it('a budget error is a RangeError, which the API answers with 400', () => {
+		expect(() => termSheet('12o23')).toThrow(RangeError);
+	});
+	it('9l17 (l = 8, 17 electrons) fits the budget: seniorities as counts add up to each term count', () => {
+		const s = termSheet('9l17');
+		for (const t of s.terms) {
+			const sum = (t.seniorities ?? []).reduce((a, v) => a + BigInt(v.count), 0n);
+			expect(sum).toBe(BigInt(t.count));
+		}
+		// C(34,17) = 2 333 606 220 microstates (combinatorics).
+		expect(s.microstates).toBe('2333606220');
+		expect(s.weightSum).toBe(s.microstates);
 	});
 });
 
@@ -85,7 +121,7 @@ describe('Term sheet labels and parentage', () => {
 				label: '3d⁶(⁵D)4s ⁶D'
 			}
 		]);
-		expect(s.terms.every((t) => t.parentage!.length === t.count)).toBe(true);
+		expect(s.terms.every((t) => t.parentage!.length === Number(t.count))).toBe(true);
 		expect(s.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
 		expect(s.hund).toMatchObject({ display: '⁶D₉/₂', kind: 'lowest', phrase: "lowest level by Hund's rules (heuristic)" });
 	});

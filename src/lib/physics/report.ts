@@ -3,7 +3,10 @@
  * endpoint returns and what the pages draw. It only gathers results of the engine modules
  * (parse, microstates, terms, lande, hund); no physics is computed here.
  *
- * Fractions are strings ("3/2", "2"). Counts above 2^53 are decimal strings.
+ * Fractions are strings ("3/2", "2"). Every count that can pass 2^53 (microstates, the weight
+ * sum, term and level totals, term occurrences, seniority counts, grid cells) is a `Count`: an
+ * exact decimal string ("504"), whatever its size, so readers never meet a rounded number.
+ * Statistical weights (2S+1)(2L+1) and 2J+1 stay numbers: they are small by construction.
  */
 import type { Configuration } from './types';
 import { halfString } from './half';
@@ -15,8 +18,10 @@ import { fractionString, GS_FREE_ELECTRON, landeG } from './lande';
 import { HUND_CAUTION, hundGround, hundOrder, hundWording } from './hund';
 import { levelDisplay, termDisplay } from './display';
 import { parentageItems, type ParentageItem, type ParentageStatus } from './parentageReport';
+import { checkTermSheetBudget } from './budget';
 
-export type CountValue = number | string;
+/** An exact count as a decimal string of digits, e.g. "504" or "1449604113205248000". */
+export type Count = string;
 
 export interface TermSheetLevel {
 	J: string;
@@ -38,11 +43,12 @@ export interface TermSheetTerm {
 	L: number;
 	letter: string;
 	multiplicity: number;
-	count: number;
+	/** How often the term occurs. */
+	count: Count;
 	/** The seniority when the term occurs once (or all occurrences share it); null otherwise or with several open subshells. */
 	seniority: number | null;
-	/** One seniority per occurrence for a single open subshell (Racah); null with several open subshells. */
-	seniorities: number[] | null;
+	/** How many occurrences have each seniority, ascending v, for a single open subshell (Racah); null with several open subshells. */
+	seniorities: { seniority: number; count: Count }[] | null;
 	weight: number;
 	/** 1 = lowest in Hund's heuristic order. */
 	hundRank: number;
@@ -60,11 +66,13 @@ export interface TermSheet {
 		core: string | null;
 		subshells: { n: number; l: number; occupancy: number; label: string; open: boolean }[];
 	};
-	microstates: CountValue;
-	termCount: number;
-	levelCount: number;
+	microstates: Count;
+	/** Terms counted with multiplicity (d³: 8). */
+	termCount: Count;
+	/** Single J levels, every occurrence counted (d³: 19). */
+	levelCount: Count;
 	/** Σ over terms of count × (2S+1)(2L+1): must equal `microstates`. */
-	weightSum: CountValue;
+	weightSum: Count;
 	gs: { value: number; exact: boolean };
 	terms: TermSheetTerm[];
 	/** Whether `parentage` is listed on the terms, and why not. */
@@ -83,10 +91,10 @@ export interface TermSheet {
 		phrase: string;
 		why: string;
 	};
-	grid: { ML: number[]; MS: string[]; counts: CountValue[][] };
+	grid: { ML: number[]; MS: string[]; counts: Count[][] };
 }
 
-const count = (v: bigint): CountValue => (v <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(v) : v.toString());
+const count = (v: bigint | number): Count => v.toString();
 
 function gridRows(grid: MicrostateGrid): TermSheet['grid'] {
 	const ML: number[] = [];
@@ -103,11 +111,14 @@ export interface TermSheetOptions {
 
 /**
  * The Term sheet of a configuration given as text or parsed.
- * Throws ConfigurationError (with `.token`) for bad notation, RangeError when a count is too large to report.
+ * Throws ConfigurationError (with `.token`) for bad notation, BudgetError (a RangeError) before
+ * any work when the configuration is over a budget of ./budget.ts (counting work, grid cells,
+ * J-level rows), RangeError when a term count is too large to report.
  * @example termSheet('3d5 4s').hund.level // '7S3'
  */
 export function termSheet(input: string | Configuration, options: TermSheetOptions = {}): TermSheet {
 	const cfg = typeof input === 'string' ? parseConfiguration(input) : input;
+	checkTermSheetBudget(cfg.subshells, microstateTotal(cfg) <= BigInt(Number.MAX_SAFE_INTEGER));
 	const free = options.gs === 'free';
 	const terms = termsOf(cfg);
 	const order = hundOrder(cfg);
@@ -121,17 +132,19 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 	);
 
 	let weightSum = 0n;
-	let levelCount = 0;
+	let levelCount = 0n;
+	let termCount = 0n;
 	const rows: TermSheetTerm[] = terms.map((t) => {
 		weightSum += BigInt(t.count) * BigInt(statisticalWeight(t));
+		termCount += BigInt(t.count);
 		const levels = levelsOf(t).map((lv) => {
 			const exact = landeG(t.twoS, t.L, lv.twoJ);
 			const decimal = free ? landeG(t.twoS, t.L, lv.twoJ, { gs: GS_FREE_ELECTRON }) : exact === null ? null : exact.valueOf();
 			return { J: halfString(lv.twoJ), g: exact === null ? null : fractionString(exact), gDecimal: decimal, weight: lv.weight };
 		});
-		levelCount += t.count * levels.length;
+		levelCount += BigInt(t.count) * BigInt(levels.length);
 		const seniorities = t.seniorities;
-		const sameSeniority = seniorities && seniorities.every((v) => v === seniorities[0]) ? seniorities[0] : null;
+		const sameSeniority = seniorities && seniorities.length === 1 ? seniorities[0].seniority : null;
 		const r = rank.get(`${t.twoS}|${t.L}`)!;
 		return {
 			label: termLabel(t),
@@ -141,9 +154,9 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 			L: t.L,
 			letter: termLetter(t.L),
 			multiplicity: t.twoS + 1,
-			count: t.count,
+			count: count(t.count),
 			seniority: sameSeniority,
-			seniorities,
+			seniorities: seniorities && seniorities.map((v) => ({ seniority: v.seniority, count: count(v.count) })),
 			weight: statisticalWeight(t),
 			hundRank: r.rank,
 			jOrder: r.twoJs.map(halfString),
@@ -168,8 +181,8 @@ export function termSheet(input: string | Configuration, options: TermSheetOptio
 			}))
 		},
 		microstates: count(microstateTotal(cfg)),
-		termCount: terms.reduce((a, t) => a + t.count, 0),
-		levelCount,
+		termCount: count(termCount),
+		levelCount: count(levelCount),
 		weightSum: count(weightSum),
 		gs: { value: free ? GS_FREE_ELECTRON : 2, exact: !free },
 		terms: rows,

@@ -12,43 +12,63 @@
  */
 import { decomposeGrid, subshellGrid } from './microstates';
 import { subshellCapacity } from './parse';
+import { checkSeniorityBudget } from './budget';
 
-/** The seniorities of one LS term of l^N, one entry per occurrence, ascending. */
+/** How many occurrences of one LS term have one seniority v. */
+export interface SeniorityCount {
+	seniority: number;
+	count: number;
+}
+
+/**
+ * The seniorities of one LS term of l^N as counts per seniority, ascending in v, zero counts
+ * left out: d⁵ ²D is [{ seniority: 1, count: 1 }, { seniority: 3, count: 1 }, { seniority: 5, count: 1 }].
+ * The counts add up to the number of occurrences of the term. (Counts, not one entry per
+ * occurrence: a large subshell has terms that occur 10⁸ times.)
+ */
 export interface SeniorityEntry {
 	twoS: number;
 	L: number;
-	seniorities: number[];
+	seniorities: SeniorityCount[];
 }
 
 const tableCache = new Map<string, SeniorityEntry[]>();
 
-function multiplicities(l: number, N: number): Map<string, number> {
-	const m = new Map<string, number>();
-	for (const t of decomposeGrid(subshellGrid(l, N))) m.set(`${t.twoS},${t.L}`, Number(t.count));
+function multiplicities(l: number, N: number): Map<string, bigint> {
+	const m = new Map<string, bigint>();
+	for (const t of decomposeGrid(subshellGrid(l, N))) m.set(`${t.twoS},${t.L}`, t.count);
 	return m;
 }
 
 /**
  * Seniorities of every term of l^N (Racah 1943), in the order of `decomposeGrid`
- * (2S+1 then L ascending). Throws RangeError for l outside 0…16 or N outside 0…2(2l+1).
- * @example seniorityTable(2, 3).find((t) => t.twoS === 1 && t.L === 2)?.seniorities // [1, 3]
+ * (2S+1 then L ascending), as counts per seniority. Throws RangeError for l outside 0…16 or N
+ * outside 0…2(2l+1), BudgetError (a RangeError) when the work is over MAX_GRID_WORK (./budget.ts).
+ * Every count of a single subshell with l ≤ 16 is below 2^53 (the largest, of 16v33, is about 6·10¹³).
+ * @example seniorityTable(2, 3).find((t) => t.twoS === 1 && t.L === 2)?.seniorities
+ *   // [{ seniority: 1, count: 1 }, { seniority: 3, count: 1 }]
  */
 export function seniorityTable(l: number, N: number): SeniorityEntry[] {
 	const key = `${l},${N}`;
 	const hit = tableCache.get(key);
 	if (hit) return hit;
+	const grid = subshellGrid(l, N); // validates l and N
+	checkSeniorityBudget(l, N);
 	const top = Math.min(N, subshellCapacity(l) - N);
-	const byV = new Map<number, Map<string, number>>();
+	const byV = new Map<number, Map<string, bigint>>();
 	for (let v = top % 2; v <= top; v += 2) byV.set(v, multiplicities(l, v));
 	const out: SeniorityEntry[] = [];
-	for (const t of decomposeGrid(subshellGrid(l, N))) {
+	for (const t of decomposeGrid(grid)) {
 		const k = `${t.twoS},${t.L}`;
-		const seniorities: number[] = [];
+		const seniorities: SeniorityCount[] = [];
+		let sum = 0n;
 		for (let v = top % 2; v <= top; v += 2) {
-			const fresh = (byV.get(v)?.get(k) ?? 0) - (byV.get(v - 2)?.get(k) ?? 0);
-			for (let i = 0; i < fresh; i++) seniorities.push(v);
+			const fresh = (byV.get(v)?.get(k) ?? 0n) - (byV.get(v - 2)?.get(k) ?? 0n);
+			if (fresh < 0n) throw new Error(`internal error: negative seniority count for 2S=${t.twoS} L=${t.L} v=${v} in l=${l}^${N}`);
+			if (fresh > 0n) seniorities.push({ seniority: v, count: Number(fresh) });
+			sum += fresh;
 		}
-		if (seniorities.length !== Number(t.count)) {
+		if (sum !== t.count) {
 			throw new Error(`internal error: seniorities of 2S=${t.twoS} L=${t.L} in l=${l}^${N} do not add up`);
 		}
 		out.push({ twoS: t.twoS, L: t.L, seniorities });
@@ -58,14 +78,14 @@ export function seniorityTable(l: number, N: number): SeniorityEntry[] {
 }
 
 /**
- * Seniorities of the term (S, L) in l^N, one per occurrence, ascending; [] when the term does
- * not occur. Throws RangeError like `seniorityTable`.
- * @example senioritiesOf(2, 5, 1, 2) // [1, 3, 5] (d⁵ ²D occurs three times)
+ * Seniorities of the term (S, L) in l^N as counts per seniority (ascending v); [] when the term
+ * does not occur. Throws like `seniorityTable`.
+ * @example senioritiesOf(2, 5, 1, 2) // [{ seniority: 1, count: 1 }, { seniority: 3, count: 1 }, { seniority: 5, count: 1 }] (d⁵ ²D occurs three times)
  */
-export function senioritiesOf(l: number, N: number, twoS: number, L: number): number[] {
+export function senioritiesOf(l: number, N: number, twoS: number, L: number): SeniorityCount[] {
 	return (
 		seniorityTable(l, N)
 			.find((t) => t.twoS === twoS && t.L === L)
-			?.seniorities.slice() ?? []
+			?.seniorities.map((s) => ({ ...s })) ?? []
 	);
 }

@@ -32,11 +32,12 @@ function toSafeNumber(v: bigint, what: string): number {
 
 /**
  * The LS terms of a configuration with how often each occurs, sorted by 2S+1 then L
- * (ascending, the order of the published tables). Seniorities are given when at most one
- * subshell is open (all closed: ¹S with seniority 0), otherwise null.
+ * (ascending, the order of the published tables). Seniorities are given as counts per
+ * seniority when at most one subshell is open (all closed: ¹S with seniority 0), otherwise null.
  * Source: difference formula on the microstate grid (Condon & Shortley 1935, ch. 7; Cowan 1981, the same counting).
- * Throws ConfigurationError for an invalid subshell, RangeError when a count exceeds 2^53 or the
- * grid would need more than MAX_GRID_WORK operations (see ./microstates.ts).
+ * Throws ConfigurationError for an invalid subshell, RangeError when a count exceeds 2^53, and
+ * BudgetError (a RangeError, ./budget.ts) before any work when the grid or the seniority table
+ * would exceed MAX_GRID_WORK or MAX_GRID_CELLS.
  * @example termSummary(termsOf(parseConfiguration('2p2'))) // '1S 1D 3P'
  */
 export function termsOf(input: Configuration | readonly Subshell[]): Term[] {
@@ -45,9 +46,9 @@ export function termsOf(input: Configuration | readonly Subshell[]): Term[] {
 	const counts = decomposeGrid(microstateGrid(subshells));
 	const table = open.length === 1 ? seniorityTable(open[0].l, open[0].occupancy) : null;
 	return counts.map((t) => {
-		let seniorities: number[] | null = null;
-		if (open.length === 0) seniorities = [0];
-		else if (table) seniorities = table.find((e) => e.twoS === t.twoS && e.L === t.L)?.seniorities.slice() ?? null;
+		let seniorities: Term['seniorities'] = null;
+		if (open.length === 0) seniorities = [{ seniority: 0, count: 1 }];
+		else if (table) seniorities = table.find((e) => e.twoS === t.twoS && e.L === t.L)?.seniorities.map((s) => ({ ...s })) ?? null;
 		return { twoS: t.twoS, L: t.L, count: toSafeNumber(t.count, `the number of ${t.twoS + 1}${termLetter(t.L)} terms`), seniorities };
 	});
 }
@@ -96,6 +97,19 @@ export function levelCountsByJ(input: Configuration | readonly Subshell[]): Map<
 		if (diff > 0n) out.set(twoMJ, toSafeNumber(diff, `the number of levels with 2J = ${twoMJ}`));
 	}
 	return out;
+}
+
+/**
+ * Number of single J levels of a configuration, every occurrence of every term counted: each
+ * level J has exactly one state with M_J = 0 (integer J) or M_J = 1/2 (half-integer J), so the
+ * total is the number of microstates with that M_J (Condon & Shortley 1935, ch. 7, the
+ * diagonal-sum argument). Cheap: no term list is built.
+ * Throws ConfigurationError for an invalid subshell, BudgetError like `microstateGrid`.
+ * @example levelTotal(parseConfiguration('3d3')) // 19n
+ */
+export function levelTotal(input: Configuration | readonly Subshell[]): bigint {
+	const mj = mjCounts(microstateGrid(input));
+	return mj.get(0) ?? mj.get(1) ?? 0n;
 }
 
 /** Options of `termLabel`. */

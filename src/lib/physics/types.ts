@@ -51,6 +51,9 @@ export interface Term {
 	L: number;
 	/** How many times the term occurs (d3 has 2D twice). */
 	count: number;
-	/** Racah seniority for terms of a single open subshell, one entry per occurrence; null otherwise. */
-	seniorities: number[] | null;
+	/**
+	 * Racah seniority for terms of a single open subshell, as counts per seniority (ascending v,
+	 * counts adding up to `count`); null with several open subshells.
+	 */
+	seniorities: { seniority: number; count: number }[] | null;
 }

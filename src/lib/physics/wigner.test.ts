@@ -775,22 +775,26 @@ describe('9j symbols', () => {
 		expect(squares.sort()).toEqual(['1/3', '1/3', '2/3', '2/3']);
 	});
 
-	it('the exact value agrees with the same sum (Edmonds 1957 eq. 6.4.3) done in doubles', () => {
+	it('is orthogonal: Σ_{j7 j8} (2j7+1)(2j8+1)(2j3+1)(2j6+1) {j1 j2 j3; j4 j5 j6; j7 j8 j9}{j1 j2 j3′; j4 j5 j6′; j7 j8 j9} = δ_{j3 j3′} δ_{j6 j6′} (Edmonds 1957 eq. 6.4.15)', () => {
 		fc.assert(
 			fc.property(nineJArgs, (a) => {
-				const [t1, t2, t3, t4, t5, t6, t7, t8, t9] = a;
-				let total = 0;
-				for (let x = 0; x <= 16; x++) {
-					total +=
-						sgn(x) *
-						(x + 1) *
-						wigner6jFloat(t1, t4, t7, t8, t9, x) *
-						wigner6jFloat(t2, t5, t8, t4, x, t6) *
-						wigner6jFloat(t3, t6, t9, x, t1, t2);
-				}
-				expect(Math.abs(total - wigner9jFloat(t1, t2, t3, t4, t5, t6, t7, t8, t9))).toBeLessThan(FLOAT_TOLERANCE);
+				const [t1, t2, t3, t4, t5, t6, , , t9] = a;
+				for (const u3 of triadRange(t1, t2))
+					for (const u6 of triadRange(t4, t5)) {
+						let total = 0;
+						for (const t7 of triadRange(t1, t4))
+							for (const t8 of triadRange(t2, t5))
+								total +=
+									(t7 + 1) *
+									(t8 + 1) *
+									Math.sqrt((t3 + 1) * (t6 + 1) * (u3 + 1) * (u6 + 1)) *
+									wigner9jFloat(t1, t2, t3, t4, t5, t6, t7, t8, t9) *
+									wigner9jFloat(t1, t2, u3, t4, t5, u6, t7, t8, t9);
+						const expected = u3 === t3 && u6 === t6 ? 1 : 0;
+						expect(Math.abs(total - expected)).toBeLessThan(1e-9);
+					}
 			}),
-			{ numRuns: 200 }
+			{ numRuns: 100 }
 		);
 	});
 });

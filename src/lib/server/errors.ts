@@ -4,7 +4,7 @@
  */
 export class ServiceError extends Error {
 	constructor(
-		readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 429,
+		readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429,
 		message: string,
 		readonly details: Record<string, unknown> = {}
 	) {

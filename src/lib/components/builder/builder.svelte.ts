@@ -7,7 +7,7 @@
  */
 import { ConfigurationError, parseConfiguration, subshellLabel } from '$lib/physics/parse';
 import type { Configuration } from '$lib/physics/types';
-import { CORE_SPECS, TRAY_SPECS, capacityOf, coreKey, coreName, freshId, inCore, subshellKey, type Chip } from './chips.svelte';
+import { CORE_SPECS, TRAY_SPECS, capacityOf, coreKey, coreName, freshId, inCore, subshellKey, type Chip } from './chips';
 
 export interface NotationProblem {
 	message: string;

@@ -7,11 +7,12 @@ import { and, eq, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { levelAnnotations, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
-import { badRequest, conflict, notFound } from '../errors';
+import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { entryWarnings, readEntry } from './shelf';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput, reattachSchema } from '../validation';
 import { termSheet, type TermSheet } from '../../physics/report';
+import { BudgetError } from '../../physics/budget';
 import { levelKey, levelRefs, levelText } from '../../levels';
 import { numberText } from '../../energyText';
 
@@ -47,6 +48,27 @@ function withTexts<R extends AnnotationRow>(a: R): R & { observedEnergyText: str
 	};
 }
 
+/**
+ * The Term sheet and level list of a stored entry. An entry saved before the engine's budgets
+ * existed may be over them: that is answered with a clear 422 instead of running the computation.
+ */
+function entryLevels(entry: { notation: string }): { sheet: TermSheet; refs: ReturnType<typeof levelRefs> } {
+	try {
+		const sheet = termSheet(entry.notation);
+		return { sheet, refs: levelRefs(sheet.terms) };
+	} catch (e) {
+		if (e instanceof BudgetError)
+			throw new ServiceError(
+				422,
+				`The configuration ${entry.notation} of this entry is too large to show: ${e.message}. Edit the entry to a smaller configuration.`,
+				{
+					limit: e.limit
+				}
+			);
+		throw e;
+	}
+}
+
 function readAnnotations(entryId: string) {
 	return db
 		.select(annotationColumns)
@@ -61,13 +83,10 @@ function readAnnotations(entryId: string) {
 const attachedOn = (entryId: string, key: string) =>
 	and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.levelKey, key), eq(levelAnnotations.detached, false));
 
-function knownLevels(notation: string): Set<string> {
-	return new Set(levelRefs(termSheet(notation).terms).map(levelKey));
-}
-
-function checkKnownLevel(notation: string, key: string, known = knownLevels(notation)) {
+function checkKnownLevel(entry: { notation: string }, key: string) {
+	const known = new Set(entryLevels(entry).refs.map(levelKey));
 	if (!known.has(key))
-		throw badRequest(`"${key}" is not a level of ${notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`, {
+		throw badRequest(`"${key}" is not a level of ${entry.notation}; levels are named like term#occurrence|J, e.g. "${[...known][0]}"`, {
 			field: 'levelKey'
 		});
 }
@@ -82,13 +101,13 @@ export function listAnnotations(actor: Actor, projectId: string, entryId: string
 export function annotatedLevels(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'viewer');
 	const entry = readEntry(projectId, entryId);
-	const sheet: TermSheet = termSheet(entry.notation);
+	const { sheet, refs } = entryLevels(entry);
 	const all = readAnnotations(entryId);
 	const notes = new Map(all.filter((a) => !a.detached).map((a) => [a.levelKey, a]));
 	// Notes written for an earlier configuration: kept and shown apart until reattached or deleted.
 	const detached = all.filter((a) => a.detached);
 	const byTerm = new Map(sheet.terms.map((t) => [t.label, t]));
-	const levels = levelRefs(sheet.terms).map((ref) => {
+	const levels = refs.map((ref) => {
 		const term = byTerm.get(ref.term)!;
 		const level = term.levels.find((lv) => lv.J === ref.J)!;
 		const key = levelKey(ref);
@@ -97,7 +116,7 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 			...ref,
 			multiplicity: term.multiplicity,
 			letter: term.letter,
-			count: term.count,
+			count: Number(term.count), // at most MAX_ENTRY_LEVELS (levelRefs checks), so exact
 			g: level.g,
 			gDecimal: level.gDecimal,
 			hundRank: term.hundRank,
@@ -114,7 +133,7 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 	projectAccess(actor, projectId, 'editor');
 	const data = parseInput(annotationInputSchema, input);
 	const entry = readEntry(projectId, entryId);
-	checkKnownLevel(entry.notation, data.levelKey);
+	checkKnownLevel(entry, data.levelKey);
 	return db.transaction((tx) => {
 		const current = tx.select().from(levelAnnotations).where(attachedOn(entryId, data.levelKey)).get();
 		const values = {
@@ -185,7 +204,7 @@ export function reattachAnnotation(actor: Actor, projectId: string, entryId: str
 	projectAccess(actor, projectId, 'editor');
 	const data = parseInput(reattachSchema, input);
 	const entry = readEntry(projectId, entryId);
-	checkKnownLevel(entry.notation, data.levelKey);
+	checkKnownLevel(entry, data.levelKey);
 	return db.transaction((tx) => {
 		const note = noteById(entryId, annotationId);
 		if (note.version !== data.version)

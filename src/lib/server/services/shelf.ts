@@ -13,13 +13,26 @@ import { pageSchema, parseInput, shelfInputSchema, shelfPatchSchema } from '../v
 import { ConfigurationError, parseConfiguration } from '../../physics/parse';
 import { parseSpecies, type Species } from '../../physics/elements';
 import { checkElectrons, sameConfiguration } from '../../physics/implied';
+import { BudgetError, checkTermSheetBudget, MAX_ENTRY_LEVELS } from '../../physics/budget';
+import { microstateTotal } from '../../physics/microstates';
+import { levelTotal } from '../../physics/terms';
 
 /** Checks the notation with the term engine's parser; the text is stored as typed. */
 function checkNotation(notation: string) {
 	try {
-		parseConfiguration(notation);
+		// The entry page lists every level of the Term sheet: both must fit the engine's budgets.
+		const cfg = parseConfiguration(notation);
+		checkTermSheetBudget(cfg.subshells, microstateTotal(cfg) <= BigInt(Number.MAX_SAFE_INTEGER));
+		const levels = levelTotal(cfg);
+		if (levels > BigInt(MAX_ENTRY_LEVELS))
+			throw new BudgetError(
+				`this configuration has ${levels} single levels, over the limit of ${MAX_ENTRY_LEVELS} for a Shelf entry`,
+				Number(levels),
+				MAX_ENTRY_LEVELS
+			);
 	} catch (e) {
 		if (e instanceof ConfigurationError) throw badRequest(e.message, { field: 'notation', token: e.token });
+		if (e instanceof BudgetError) throw badRequest(e.message, { field: 'notation', limit: e.limit });
 		throw e;
 	}
 }

@@ -55,14 +55,21 @@ export const SHEET_COLUMNS: SheetColumn[] = [
 		termColumn: false,
 		sortValue: (r) => [r.term.multiplicity, r.term.L, halfValue(r.level.J)]
 	},
-	{ id: 'count', label: 'Count', title: 'How often the term occurs', numeric: true, termColumn: true, sortValue: (r) => [r.term.count] },
+	{
+		id: 'count',
+		label: 'Count',
+		title: 'How often the term occurs',
+		numeric: true,
+		termColumn: true,
+		sortValue: (r) => [Number(r.term.count)]
+	},
 	{
 		id: 'v',
 		label: 'v',
-		title: 'Seniority (Racah), one per occurrence; single open subshell only',
+		title: 'Seniority (Racah) of the occurrences, with a count where several share one; single open subshell only',
 		numeric: true,
 		termColumn: true,
-		sortValue: (r) => [r.term.seniorities?.[0] ?? -1]
+		sortValue: (r) => [r.term.seniorities?.[0]?.seniority ?? -1]
 	},
 	{ id: 'S', label: 'S', title: 'Total spin', numeric: true, termColumn: true, sortValue: (r) => [halfValue(r.term.S)] },
 	{ id: 'L', label: 'L', title: 'Total orbital angular momentum', numeric: true, termColumn: true, sortValue: (r) => [r.term.L] },

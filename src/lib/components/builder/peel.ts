@@ -5,7 +5,7 @@
  * their blocks of ones are subtracted from the counts for display.
  */
 import type { TermSheet } from '$lib/physics/report';
-import { halfValue, termKey } from './sheetRows.svelte';
+import { halfValue, termKey } from './sheetRows';
 
 export interface PeelTerm {
 	/** "4F" */
@@ -19,11 +19,16 @@ export interface PeelTerm {
 	count: number;
 }
 
-/** Each occurrence of each term, largest S first, then largest L. */
+/** Most term occurrences the State grid takes out one by one (more would only freeze the page). */
+export const MAX_PEEL_TERMS = 2000;
+
+/** Each occurrence of each term, largest S first, then largest L; [] when there are more than MAX_PEEL_TERMS. */
 export function peelOrder(sheet: TermSheet): PeelTerm[] {
+	if (BigInt(sheet.termCount) > BigInt(MAX_PEEL_TERMS)) return [];
 	const list: PeelTerm[] = [];
 	for (const t of sheet.terms) {
-		for (let k = 1; k <= t.count; k++) {
+		const count = Number(t.count);
+		for (let k = 1; k <= count; k++) {
 			list.push({
 				key: termKey(t),
 				multiplicity: t.multiplicity,
@@ -31,7 +36,7 @@ export function peelOrder(sheet: TermSheet): PeelTerm[] {
 				twoS: t.multiplicity - 1,
 				L: t.L,
 				occurrence: k,
-				count: t.count
+				count
 			});
 		}
 	}
