@@ -1,8 +1,12 @@
 // Starts the built app (build/) with sensible local defaults.
 // adapter-node needs ORIGIN to accept form posts; default it to this machine's address.
+import { answerClientErrorsAsJson } from './client-error.js';
+
 const port = process.env.PORT ?? '3000';
 process.env.PORT = port;
 process.env.ORIGIN ??= `http://localhost:${port}`;
 process.env.HOST ??= '127.0.0.1';
 console.log(`Termwright on ${process.env.ORIGIN} (database: ${process.env.DATABASE_PATH ?? 'data/termwright.db'})`);
-await import('../build/index.js');
+const { server } = await import('../build/index.js');
+// polka keeps the node:http server on `.server`.
+answerClientErrorsAsJson(server.server);

@@ -5,6 +5,8 @@ declare global {
 	namespace App {
 		interface Error {
 			message: string;
+			/** Ties an unexpected error's answer to its line in the server log. */
+			id?: string;
 		}
 		interface Locals {
 			user: User | null;

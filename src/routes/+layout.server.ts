@@ -1,5 +1,8 @@
 import type { LayoutServerLoad } from './$types';
+import { outboxViewIsOn } from '$lib/server/mail';
 
 export const load: LayoutServerLoad = ({ locals }) => ({
-	user: locals.user ? { id: locals.user.id, name: locals.user.name, email: locals.user.email, siteRole: locals.user.siteRole } : null
+	user: locals.user ? { id: locals.user.id, name: locals.user.name, email: locals.user.email, siteRole: locals.user.siteRole } : null,
+	/** Whether site admins see the Outbox link (development and demo only). */
+	outbox: locals.user?.siteRole === 'admin' && outboxViewIsOn()
 });

@@ -30,13 +30,27 @@ const LISTED: Listed = {
 	'GET /api/v1/wigner': { summary: 'Wigner 3j/6j/9j or Clebsch–Gordan: ?symbol=6j&args=1,1,1,1,1,1', access: 'public' },
 	'GET /api/v1/species': { summary: 'ground configuration of an atom or ion: ?name=Fe II', access: 'public' },
 	'GET /api/v1/microstates': { summary: 'explicit microstates, a page at a time: ?config=2p2&offset=0&limit=50', access: 'public' },
+	'GET /api/v1/transitions': {
+		summary: 'Transition finder: multiplets and LS strengths: ?lower=2p2&upper=2p 3s&types=E1,M1,E2',
+		access: 'public'
+	},
+	'GET /api/v1/airvac': {
+		summary: 'standard air ↔ vacuum wavelength (Morton 2000): ?vacuum=6564.61 or ?air=6562.80 (Å)',
+		access: 'public'
+	},
+	'POST /api/v1/match': { summary: 'Line matcher: { levels, lines, tolerance?, types? } → ranked candidates per line', access: 'public' },
 	'GET /api/v1/projects': { summary: 'your projects', access: 'signed-in' },
 	'POST /api/v1/projects': { summary: 'create a project { name, description }', access: 'signed-in' },
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },
 	'GET /api/v1/projects/:projectId/members': { summary: 'members and their roles', access: 'viewer' },
-	'POST /api/v1/projects/:projectId/members': { summary: 'add a member { email, role }', access: 'owner' },
+	'POST /api/v1/projects/:projectId/members': {
+		summary: 'add a member { email, role }; the answer is the same whether or not an account uses the e-mail',
+		access: 'owner'
+	},
+	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },
+	'DELETE /api/v1/projects/:projectId/membership': { summary: 'leave the project (not the last owner)', access: 'viewer' },
 	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf, a page at a time: ?limit=50&cursor=&q=', access: 'viewer' },
 	'POST /api/v1/projects/:projectId/shelf': { summary: 'add a configuration to the Shelf', access: 'editor' },
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { summary: 'one Shelf entry', access: 'viewer' },

@@ -8,6 +8,9 @@
 import type { TermSheet } from '$lib/physics/report';
 import type { ExactJson } from '$lib/physics/exact';
 import type { JjLabelPiece } from '$lib/physics/jj';
+import type { FinderResult } from '$lib/physics/finder';
+import type { MatchResult, Tolerance } from '$lib/physics/matcher';
+import type { TransitionType } from '$lib/physics/transitions';
 
 /** Every failure: status 4xx/5xx with this body. */
 export interface ApiErrorBody {
@@ -97,6 +100,25 @@ export interface MicrostatesResponse {
 	items: { index: string; ML: number; MS: string; orbitals: string[][] }[];
 }
 
+/** Transition finder: multiplets between (or within) configurations, with LS strengths. */
+export type TransitionsResponse = FinderResult;
+
+/** Air ↔ vacuum, Å; wavenumber cm⁻¹. */
+export interface AirvacResponse {
+	vacuum: number;
+	air: number;
+	wavenumber: number;
+	refractiveIndex: number;
+	formula: string;
+}
+
+/** Line matcher on posted levels and lines; indices point into the posted arrays. */
+export interface MatchResponse extends MatchResult {
+	tolerance: Tolerance;
+	types: TransitionType[];
+	caution: string;
+}
+
 // ---------------------------------------------------------------- project routes (members)
 
 export type ProjectRoleName = 'viewer' | 'editor' | 'owner';
@@ -172,13 +194,19 @@ export interface ApiResponses {
 	'GET /api/v1/wigner': WignerResponse;
 	'GET /api/v1/species': SpeciesResponse;
 	'GET /api/v1/microstates': MicrostatesResponse;
+	'GET /api/v1/transitions': TransitionsResponse;
+	'GET /api/v1/airvac': AirvacResponse;
+	'POST /api/v1/match': MatchResponse;
 	'GET /api/v1/projects': { projects: ProjectListItem[] };
 	'POST /api/v1/projects': { project: ProjectJson };
 	'GET /api/v1/projects/:projectId': { project: ProjectJson };
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
 	'DELETE /api/v1/projects/:projectId': null;
 	'GET /api/v1/projects/:projectId/members': { members: MemberJson[] };
-	'POST /api/v1/projects/:projectId/members': { member: MemberJson };
+	/** The same answer whether or not an account uses the e-mail (no account discovery). */
+	'POST /api/v1/projects/:projectId/members': { result: { email: string; role: ProjectRoleName; message: string } };
+	'GET /api/v1/projects/:projectId/membership': { membership: { role: ProjectRoleName } };
+	'DELETE /api/v1/projects/:projectId/membership': null;
 	'GET /api/v1/projects/:projectId/shelf': { entries: Omit<ShelfEntryJson, 'warnings'>[]; nextCursor: string | null };
 	'POST /api/v1/projects/:projectId/shelf': { entry: ShelfEntryJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };

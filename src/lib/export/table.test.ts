@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { latexConfiguration, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
+import { csvSafeCell, latexConfiguration, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
 import { levelColumns, levelRows } from './term-sheet';
 import { termSheet } from '../physics/report';
 
@@ -12,6 +12,45 @@ const columns: Column<Row>[] = [
 describe('exports', () => {
 	it('CSV quotes commas and quotes (RFC 4180)', () => {
 		expect(toCsv([{ name: 'a, "b"', value: 1 }], columns)).toBe('name,value\r\n"a, ""b""",1');
+	});
+
+	// OWASP "CSV Injection" cheat sheet: prefix cells starting with = + - @ tab CR with an apostrophe.
+	it('CSV neutralises formula cells with a leading apostrophe', () => {
+		const csv = toCsv(
+			[
+				{ name: '=HYPERLINK("http://evil.example","x")', value: 1 },
+				{ name: '+1+cmd|calc', value: 2 },
+				{ name: '-2+3', value: 3 },
+				{ name: '@SUM(A1)', value: 4 },
+				{ name: '\t=1', value: 5 },
+				{ name: '\r=1', value: 6 }
+			],
+			columns
+		);
+		const lines = csv.split('\r\n');
+		expect(lines[1]).toBe(`"'=HYPERLINK(""http://evil.example"",""x"")",1`);
+		expect(lines[2]).toBe("'+1+cmd|calc,2");
+		expect(lines[3]).toBe("'-2+3,3");
+		expect(lines[4]).toBe("'@SUM(A1),4");
+		expect(lines[5]).toBe("'\t=1,5");
+		expect(lines[6]).toBe(`"'\r=1",6`);
+	});
+
+	it('CSV keeps negative numbers and exact fractions as numbers', () => {
+		const csv = toCsv(
+			[
+				{ name: '-5', value: -12400 },
+				{ name: '-4/7', value: -0.5 },
+				{ name: '+1.5e-3', value: 0 },
+				{ name: '−12400', value: null }
+			],
+			columns
+		);
+		expect(csv.split('\r\n').slice(1)).toEqual(['-5,-12400', '-4/7,-0.5', '+1.5e-3,0', '−12400,']);
+		expect(csvSafeCell(-3)).toBe(-3);
+		expect(csvSafeCell('-3 cm-1')).toBe("'-3 cm-1");
+		expect(csvSafeCell('=')).toBe("'=");
+		expect(csvSafeCell('a=b')).toBe('a=b');
 	});
 
 	// The ten LaTeX special characters (Lamport, LaTeX user's guide); booktabs rules (booktabs package manual).

@@ -42,11 +42,30 @@ export const MIME: Record<ExportFormat, string> = {
 	tex: 'application/x-tex; charset=utf-8'
 };
 
+/** Cells a spreadsheet would run as a formula (OWASP "CSV Injection": = + - @ tab CR). */
+const FORMULA_START = /^[=+\-@\t\r]/;
+/** A plain decimal number (-5, +1.5, -12400, 2.5e-3) or an exact fraction (-4/7): data, not formulas. */
+const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$|^-?\d+\/\d+$/;
+
+/**
+ * Neutralises one CSV cell against formula injection by OWASP's rule: text that starts with
+ * `=`, `+`, `-`, `@`, tab or carriage return gets a leading apostrophe, so spreadsheets show it
+ * as text. Numbers, and text that is a plain number or an exact fraction (`-5`, `-12400`,
+ * `-4/7`), stay as they are: they cannot call functions or reach other cells.
+ * Example: `csvSafeCell('=HYPERLINK("x")')` → `"'=HYPERLINK(\"x\")"`; `csvSafeCell('-5')` → `'-5'`.
+ */
+export function csvSafeCell(value: string | number | null): string | number {
+	if (value === null) return '';
+	if (typeof value === 'number') return value;
+	return FORMULA_START.test(value) && !PLAIN_NUMBER.test(value) ? `'${value}` : value;
+}
+
+/** CSV (RFC 4180 through papaparse) with every text cell neutralised by `csvSafeCell`. */
 export function toCsv<R>(rows: readonly R[], allColumns: readonly Column<R>[]): string {
 	const columns = allColumns.filter(inFormat('csv'));
 	return Papa.unparse({
-		fields: columns.map((c) => c.key),
-		data: rows.map((r) => columns.map((c) => c.value(r) ?? ''))
+		fields: columns.map((c) => String(csvSafeCell(c.key))),
+		data: rows.map((r) => columns.map((c) => csvSafeCell(c.value(r))))
 	});
 }
 

@@ -9,6 +9,7 @@
  * Positive ions take electrons away from the outermost valence subshells first; a short table of
  * ions whose observed ground configuration differs from that rule overrides it.
  */
+import { InputError } from './input-error';
 import type { Configuration, Subshell } from './types';
 import {
 	NOBLE_GAS_CORES,
@@ -58,12 +59,10 @@ export interface GroundConfiguration {
 }
 
 /** A species that cannot be read; `token` is the offending part of the input. */
-export class SpeciesError extends Error {
-	readonly token: string;
+export class SpeciesError extends InputError {
 	constructor(message: string, token: string) {
-		super(message);
+		super(message, token);
 		this.name = 'SpeciesError';
-		this.token = token;
 	}
 }
 

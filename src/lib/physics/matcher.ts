@@ -47,6 +47,11 @@ export const STRONG_LINE_RATIO = 0.5;
 /** Default coverage factor for the combined-uncertainty tolerance (GUM §6.3, k = 2). */
 export const DEFAULT_COVERAGE_FACTOR = 2;
 
+/** Shown with every match. */
+export const MATCH_CAUTION =
+	'Candidates are level pairs whose Ritz wavenumber lies within the tolerance, not identifications: blends, ' +
+	"unknown levels and LS labels (approximations) all need the team's review before a line is assigned.";
+
 /** A level of the list to match: like SpectralLevel, with a known energy (cm⁻¹). */
 export interface MatchLevel extends SpectralLevel {
 	energy: number;

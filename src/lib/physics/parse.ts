@@ -9,19 +9,18 @@
  */
 import type { Configuration, ParentSpec, Subshell, TermSpec } from './types';
 import { L_LETTERS, MAX_LETTER_L, letterToL, lLetter, termLetterToL } from './letters';
+import { InputError } from './input-error';
 
-/** A configuration that cannot be read or does not exist; `token` is the offending piece of the input. */
 /** "a" or "an" before a letter or number as it is read aloud: an s, an f, a p, an 8d, an 11s. */
 function articleFor(word: string): 'a' | 'an' {
 	return /^([sfhilmnor]|8|11|18)/.test(word) ? 'an' : 'a';
 }
 
-export class ConfigurationError extends Error {
-	readonly token: string;
+/** A configuration that cannot be read or does not exist; `token` is the offending piece of the input. */
+export class ConfigurationError extends InputError {
 	constructor(message: string, token: string) {
-		super(message);
+		super(message, token);
 		this.name = 'ConfigurationError';
-		this.token = token;
 	}
 }
 

@@ -8,6 +8,7 @@ import {
 	multipletLabel,
 	multipletLines,
 	termSymbol,
+	parseTermSymbol,
 	transitionsBetween,
 	type LsTerm,
 	type SpectralLevel
@@ -93,6 +94,13 @@ describe('multiplet labels', () => {
 		expect(termSymbol(T(2.5, 3), 'odd')).toBe('⁶F°');
 		expect(termSymbol(T(5.5, 0), 'even')).toBe('¹²S');
 		expect(termSymbol(T(1, 1), 'odd', { ascii: true })).toBe('3Po');
+	});
+	it('reads term symbols back: 3P, ²D°, 4Fo; refuses J letters and zero multiplicity', () => {
+		expect(parseTermSymbol('3P')).toEqual({ twoS: 2, L: 1, parity: null });
+		expect(parseTermSymbol('²D°')).toEqual({ twoS: 1, L: 2, parity: 'odd' });
+		expect(parseTermSymbol(' 4Fo ')).toEqual({ twoS: 3, L: 3, parity: 'odd' });
+		expect(() => parseTermSymbol('3J')).toThrow(/L letter \(S P D F G H I K/);
+		expect(() => parseTermSymbol('0S')).toThrow(/multiplicity/);
 	});
 });
 

@@ -23,7 +23,7 @@
  */
 import Fraction from 'fraction.js';
 import { isTriad, wigner6j } from './wigner';
-import { termLetter } from './letters';
+import { termLetter, TERM_LETTERS } from './letters';
 import { halfString } from './half';
 
 export type TransitionType = 'E1' | 'M1' | 'E2';
@@ -108,6 +108,25 @@ export function termSymbol(term: LsTerm, parity: Parity, options: { ascii?: bool
 	if (options.ascii) return `${multiplicity}${letter}${parity === 'odd' ? 'o' : ''}`;
 	const sup = multiplicity.replace(/\d/g, (d) => SUPERSCRIPT_DIGITS[Number(d)]);
 	return `${sup}${letter}${parity === 'odd' ? '°' : ''}`;
+}
+
+/**
+ * Reads a term symbol: multiplicity 2S+1 (ASCII or superscript digits), the L letter, and an optional ° (or o)
+ * for odd parity: "3P", "²D°", "4Fo". `parity` is 'odd' with the mark and null without it (a missing ° is
+ * often just omitted, so it does not prove even parity).
+ * Throws RangeError naming the text and what is allowed.
+ * @example parseTermSymbol('²D°') // { twoS: 1, L: 2, parity: 'odd' }
+ */
+export function parseTermSymbol(text: string): LsTerm & { parity: Parity | null } {
+	const plain = text.trim().replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT_DIGITS.indexOf(c)));
+	const m = /^(\d{1,2})\s*([A-Z])\s*([°o])?$/.exec(plain);
+	const L = m ? TERM_LETTERS.indexOf(m[2]) : -1;
+	if (!m || L < 0 || Number(m[1]) < 1) {
+		throw new RangeError(
+			`term "${text}" is not a term symbol: write the multiplicity 2S+1, an L letter (${TERM_LETTERS.split('').join(' ')}) and ° or o for odd parity, e.g. 3P or 2Do`
+		);
+	}
+	return { twoS: Number(m[1]) - 1, L, parity: m[3] ? 'odd' : null };
 }
 
 /**

@@ -295,18 +295,8 @@ export function wigner6jFloat(tj1: number, tj2: number, tj3: number, tj4: number
 }
 
 /** `wigner9j` as a double. Throws as `wigner9j`. @example wigner9jFloat(1, 1, 2, 1, 1, 2, 2, 2, 4) // 0.1111111111111111 */
-export function wigner9jFloat(
-	tj1: number,
-	tj2: number,
-	tj3: number,
-	tj4: number,
-	tj5: number,
-	tj6: number,
-	tj7: number,
-	tj8: number,
-	tj9: number
-): number {
-	return exactToNumber(wigner9j(tj1, tj2, tj3, tj4, tj5, tj6, tj7, tj8, tj9));
+export function wigner9jFloat(...args: Parameters<typeof wigner9j>): number {
+	return exactToNumber(wigner9j(...args));
 }
 
 // ------------------------------------------------------------- API helper

@@ -135,3 +135,33 @@ describe('input checks', () => {
 		expect(() => addMember(owner, projectId, { email: 'stranger@example.org', role: 'superuser' })).toThrow(/viewer, editor, owner/);
 	});
 });
+
+describe('adding members does not tell who has an account (no account discovery)', () => {
+	it('answers the same for an e-mail with and without an account, and adds the existing one', async () => {
+		const { memberAddedMessage } = await import('./services/projects');
+		const p = createProject(owner, { name: 'Discovery test' }).id;
+		const withAccount = addMember(owner, p, { email: 'stranger@example.org', role: 'viewer' });
+		const without = addMember(owner, p, { email: 'nobody-at-all@example.org', role: 'viewer' });
+		const strip = (r: { email: string; message: string }) => ({ ...r, email: '', message: r.message.replace(r.email, '') });
+		expect(strip(withAccount)).toEqual(strip(without));
+		expect(without.message).toBe(memberAddedMessage('nobody-at-all@example.org', 'viewer'));
+		expect(listMembers(owner, p).map((m) => m.email)).toEqual(expect.arrayContaining(['stranger@example.org']));
+		expect(listMembers(owner, p)).toHaveLength(2);
+		expect(statusOf(() => addMember(owner, p, { email: 'stranger@example.org', role: 'editor' }))).toBe(409);
+	});
+});
+
+describe('leaving a project', () => {
+	it('a member leaves and then gets 404; the last owner cannot leave', async () => {
+		const { leaveProject } = await import('./services/projects');
+		const p = createProject(owner, { name: 'Leaving test' }).id;
+		addMember(owner, p, { email: 'viewer@example.org', role: 'viewer' });
+		expect(statusOf(() => leaveProject(viewer, p))).toBe('ok');
+		expect(statusOf(() => getProject(viewer, p))).toBe(404);
+		expect(statusOf(() => leaveProject(viewer, p))).toBe(404);
+		expect(statusOf(() => leaveProject(owner, p))).toBe(409);
+		addMember(owner, p, { email: 'editor@example.org', role: 'owner' });
+		expect(statusOf(() => leaveProject(owner, p))).toBe('ok');
+		expect(listMembers(editor, p).map((m) => m.role)).toEqual(['owner']);
+	});
+});

@@ -6,8 +6,7 @@ import { ZodError } from 'zod';
 import type { Actor } from './access';
 import { ServiceError } from './errors';
 import { actorForToken } from './services/tokens';
-import { ConfigurationError } from '../physics/parse';
-import { SpeciesError } from '../physics/elements';
+import { InputError } from '../physics/input-error';
 import type { ApiResponses, RouteKey, Sendable } from '../api/types';
 
 /** The signed-in user, or a redirect to the sign-in page that comes back here. */
@@ -74,11 +73,21 @@ export function api<E extends RequestEvent>(handler: (event: E) => Response | Pr
 			if (e instanceof ServiceError) return jsonError(e.status, e.message, e.details);
 			if (e instanceof ZodError) return jsonError(400, e.issues[0]?.message ?? 'Bad input');
 			// The engine reports bad input with these; each message says what is allowed.
-			if (e instanceof ConfigurationError || e instanceof SpeciesError) return jsonError(400, e.message, { token: e.token });
+			if (e instanceof InputError) return jsonError(400, e.message, { token: e.token });
 			if (e instanceof RangeError) return jsonError(400, e.message);
+			// SvelteKit's own request errors (a body over BODY_SIZE_LIMIT is a 413) carry a safe status and message.
+			if (isKitRequestError(e)) return jsonError(e.status, e.message);
+			// Anything else is unexpected: handleError logs it with an id and the handle hook answers in the shape.
 			throw e;
 		}
 	};
+}
+
+/** SvelteKit's internal `SvelteKitError` (not exported): an Error with a 4xx status, e.g. 413 Payload Too Large. */
+function isKitRequestError(e: unknown): e is Error & { status: number } {
+	if (!(e instanceof Error) || e.name === 'ServiceError') return false;
+	const status: unknown = (e as unknown as { status?: unknown }).status;
+	return typeof status === 'number' && status >= 400 && status < 500;
 }
 
 /** The API's actor: a personal API token (`Authorization: Bearer tw_…`) or the cookie session. */

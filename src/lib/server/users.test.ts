@@ -27,18 +27,66 @@ describe('accounts', () => {
 		await expect(checkPassword({ email: 'nobody@example.org', password: 'wrong password' }, '10.0.0.2')).rejects.toThrow(SIGN_IN_FAILED);
 	});
 
-	it('locks an account out after five failures in a row', async () => {
+	it('wrong passwords from one address do not lock out the right password from another', async () => {
 		await signUp({ name: 'Locked', email: 'locked@example.org', password: 'right-password-1' });
-		for (let i = 0; i < 5; i++)
-			await expect(checkPassword({ email: 'locked@example.org', password: 'nope-nope' }, '10.0.0.3')).rejects.toThrow(SIGN_IN_FAILED);
+		for (let i = 0; i < 8; i++)
+			await expect(checkPassword({ email: 'locked@example.org', password: 'nope-nope' }, '10.0.0.3')).rejects.toThrow(
+				i < 5 ? SIGN_IN_FAILED : /Too many failed sign-ins from this address/
+			);
+		// The attacker's pair waits, even with the right password …
 		await expect(checkPassword({ email: 'locked@example.org', password: 'right-password-1' }, '10.0.0.3')).rejects.toThrow(
-			/Too many sign-in attempts/
+			/try again in 30 seconds/
 		);
+		// … while the owner, from their own address, signs in at once.
+		await expect(checkPassword({ email: 'locked@example.org', password: 'right-password-1' }, '192.0.2.7')).resolves.toMatchObject({
+			email: 'locked@example.org'
+		});
+	});
+
+	it('parallel guesses from one pair cannot all slip past the backoff', async () => {
+		await signUp({ name: 'Parallel', email: 'parallel@example.org', password: 'right-password-2' });
+		const guesses = Array.from({ length: 12 }, () =>
+			checkPassword({ email: 'parallel@example.org', password: 'nope-nope' }, '10.0.0.9').catch((e: Error) => e.message)
+		);
+		const answers = await Promise.all(guesses);
+		expect(answers.filter((m) => m === SIGN_IN_FAILED).length).toBeLessThanOrEqual(5);
 	});
 
 	it('refuses short passwords and malformed e-mails with what is allowed', async () => {
 		await expect(signUp({ name: 'A', email: 'a@example.org', password: 'short' })).rejects.toThrow(/at least 10 characters/);
 		await expect(signUp({ name: 'A', email: 'not-an-email', password: 'long-enough-pw' })).rejects.toThrow(/name@example.org/);
+	});
+});
+
+describe('backoff limiter', () => {
+	// The schedule is ours (common practice, no source): 4 free, then 30 s doubling to 15 min.
+	it('waits 30 s, 1 min, 2 min … 15 min after the free failures; a success forgets', async () => {
+		const { createBackoffLimiter } = await import('./rate-limit');
+		let t = 0;
+		const limiter = createBackoffLimiter({ freeFailures: 4, baseMs: 30_000, maxMs: 900_000, forgetMs: 86_400_000 }, () => t);
+		const waits = Array.from({ length: 10 }, () => limiter.fail('pair'));
+		expect(waits).toEqual([0, 0, 0, 0, 30_000, 60_000, 120_000, 240_000, 480_000, 900_000]);
+		expect(limiter.waitMs('pair')).toBe(900_000);
+		expect(limiter.waitMs('other pair')).toBe(0);
+		t += 900_000;
+		expect(limiter.waitMs('pair')).toBe(0);
+		expect(limiter.fail('pair')).toBe(900_000);
+		limiter.succeed('pair');
+		expect(limiter.fail('pair')).toBe(0);
+		t += 86_400_000;
+		expect(limiter.waitMs('pair')).toBe(0);
+	});
+
+	it('a looser per-address cap stops spraying many accounts from one address', async () => {
+		const { SIGN_IN_ADDRESS_LIMIT } = await import('./services/users');
+		for (let i = 0; i < SIGN_IN_ADDRESS_LIMIT.failures; i++)
+			await expect(checkPassword({ email: `spray${i}@example.org`, password: 'nope-nope' }, '198.51.100.1')).rejects.toThrow(
+				SIGN_IN_FAILED
+			);
+		await expect(checkPassword({ email: 'hash@example.org', password: 'correct horse battery' }, '198.51.100.1')).rejects.toThrow(
+			/Too many failed sign-ins/
+		);
+		await expect(checkPassword({ email: 'hash@example.org', password: 'correct horse battery' }, '198.51.100.2')).resolves.toBeTruthy();
 	});
 });
 

@@ -5,7 +5,7 @@ import { and, asc, eq, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { memberships, projects, users, type ProjectRole } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
-import { ServiceError, badRequest, conflict, notFound } from '../errors';
+import { ServiceError, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { memberInputSchema, parseInput, projectInputSchema, projectPatchSchema, roleSchema } from '../validation';
 
@@ -66,20 +66,43 @@ export function listMembers(actor: Actor, projectId: string) {
 		.all();
 }
 
-/** Adds an existing user by e-mail. */
+/** The one answer to "add a member", whether or not an account uses the e-mail. */
+export const memberAddedMessage = (email: string, role: ProjectRole) =>
+	`If a Termwright account uses ${email}, it is now a member (${role}). Nobody else is told whether such an account exists.`;
+
+/**
+ * Adds the account that uses an e-mail, with a role. The answer is the same whether or not such
+ * an account exists, so the form cannot be used to find out who has an account (only the member
+ * list, which owners see anyway, tells). Someone who is already a member gets 409.
+ */
 export function addMember(actor: Actor, projectId: string, input: unknown) {
 	projectAccess(actor, projectId, 'owner');
 	const data = parseInput(memberInputSchema, input);
-	const user = db.select().from(users).where(eq(users.email, data.email)).get();
-	if (!user) throw badRequest(`No Termwright account uses ${data.email}; ask them to sign up first`, { field: 'email' });
-	const existing = db
-		.select()
-		.from(memberships)
-		.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, user.id)))
-		.get();
-	if (existing) throw conflict(`${user.name} is already a member (${existing.role})`, { field: 'email' });
-	db.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
-	return { userId: user.id, name: user.name, email: user.email, role: data.role };
+	db.transaction((tx) => {
+		const user = tx.select({ id: users.id }).from(users).where(eq(users.email, data.email)).get();
+		if (!user) return;
+		const existing = tx
+			.select()
+			.from(memberships)
+			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, user.id)))
+			.get();
+		if (existing) throw conflict(`${data.email} is already a member (${existing.role})`, { field: 'email' });
+		tx.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
+	});
+	return { email: data.email, role: data.role, message: memberAddedMessage(data.email, data.role) };
+}
+
+/** A member leaves a project of their own accord; the last owner must hand over first. */
+export function leaveProject(actor: Actor, projectId: string) {
+	projectAccess(actor, projectId, 'viewer');
+	db.transaction((tx) => {
+		const m = membershipOf(projectId, actor.id);
+		if (m.role === 'owner' && ownerCount(projectId) === 1)
+			throw new ServiceError(409, 'You are the last owner; make someone else owner before you leave, or delete the project');
+		tx.delete(memberships)
+			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, actor.id)))
+			.run();
+	});
 }
 
 function ownerCount(projectId: string): number {

@@ -8,12 +8,22 @@ import { requireSiteAdmin, type Actor } from '../access';
 import { ServiceError, badRequest, notFound } from '../errors';
 import { newId } from '../ids';
 import { hashPassword, verifyPassword } from '../password';
-import { createLimiter } from '../rate-limit';
+import { createBackoffLimiter, createLimiter, waitInWords } from '../rate-limit';
 import { parseInput, signInSchema, signUpSchema, siteRoleSchema } from '../validation';
 
-/** Five failed sign-ins per account (or twenty per address) in fifteen minutes. */
-const perAccount = createLimiter(5, 15 * 60_000);
-const perAddress = createLimiter(20, 15 * 60_000);
+/**
+ * Sign-in throttling that nobody can aim at someone else's account:
+ * - per (account, address) pair, exponential backoff: four free failures, then 30 s, 1 min,
+ *   2 min … up to 15 min per further failure; forgotten after a day without failures or on success.
+ *   A wrong password from one address never blocks the right password from another.
+ * - per address, a looser cap on failures across all accounts: 50 in 15 minutes (password
+ *   spraying from one address). An office behind one NAT address shares this budget.
+ * Unknown e-mails count like known ones, so the answers do not tell them apart.
+ */
+export const SIGN_IN_PAIR_BACKOFF = { freeFailures: 4, baseMs: 30_000, maxMs: 15 * 60_000, forgetMs: 24 * 60 * 60_000 };
+export const SIGN_IN_ADDRESS_LIMIT = { failures: 50, windowMs: 15 * 60_000 };
+const perPair = createBackoffLimiter(SIGN_IN_PAIR_BACKOFF);
+const perAddress = createLimiter(SIGN_IN_ADDRESS_LIMIT.failures, SIGN_IN_ADDRESS_LIMIT.windowMs);
 
 /** The same words whether the e-mail is unknown or the password wrong. */
 export const SIGN_IN_FAILED = 'E-mail or password is not right';
@@ -40,22 +50,22 @@ export async function signUp(input: unknown): Promise<Actor> {
 
 export async function checkPassword(input: unknown, address: string): Promise<Actor> {
 	const data = parseInput(signInSchema, input);
-	const accountKey = `signin:${data.email}`;
-	const addressKey = `signin-ip:${address}`;
-	const wait = Math.max(perAccount.check(accountKey), perAddress.check(addressKey));
-	if (wait > 0)
-		throw new ServiceError(429, `Too many sign-in attempts; try again in ${Math.ceil(wait / 60)} minute${wait > 60 ? 's' : ''}`);
+	const pairKey = `${data.email}\n${address}`;
+	const wait = Math.max(perPair.waitMs(pairKey), perAddress.check(address) * 1000);
+	if (wait > 0) throw new ServiceError(429, `Too many failed sign-ins from this address; try again in ${waitInWords(wait)}`);
+	// Count the attempt before the (slow) hash check, so parallel guesses cannot all slip through
+	// the check above; a success forgets it again.
+	perPair.fail(pairKey);
 	const user = db.select().from(users).where(eq(users.email, data.email)).get();
 	// Verify against a dummy hash for unknown e-mails so timing does not tell them apart.
 	const ok = user
 		? await verifyPassword(user.passwordHash, data.password)
 		: (await verifyPassword(await dummyHash(), data.password), false);
 	if (!user || !ok) {
-		perAccount.hit(accountKey);
-		perAddress.hit(addressKey);
+		perAddress.hit(address);
 		throw badRequest(SIGN_IN_FAILED);
 	}
-	perAccount.reset(accountKey);
+	perPair.succeed(pairKey);
 	return { id: user.id, email: user.email, name: user.name, siteRole: user.siteRole };
 }
 

@@ -1,10 +1,21 @@
+import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { createToken, listTokens, revokeToken } from '$lib/server/services/tokens';
+import { changePassword, signOutEverywhere } from '$lib/server/services/account';
+import { startSession } from '$lib/server/session';
 import { forAction, requireUser } from '$lib/server/http';
+
+/** What the page says after a password change, reset or "sign out everywhere" (read from the redirect). */
+function endedNotice(url: URL) {
+	const ended = url.searchParams.get('ended');
+	if (ended !== 'reset' && ended !== 'change' && ended !== 'everywhere') return null;
+	const tokens = Math.max(0, Number(url.searchParams.get('tokens')) || 0);
+	return { ended, tokens };
+}
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
-	return { tokens: listTokens(user) };
+	return { tokens: listTokens(user), notice: endedNotice(event.url) };
 };
 
 export const actions: Actions = {
@@ -19,5 +30,26 @@ export const actions: Actions = {
 		const id = String((await event.request.formData()).get('id') ?? '');
 		const result = await forAction(() => revokeToken(user, id));
 		return result.ok ? { revoked: true } : result.failure;
+	},
+	/** Ends every session (this one too) and revokes every token; this browser gets a fresh session. */
+	password: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const input = { current: String(form.get('current') ?? ''), password: String(form.get('password') ?? '') };
+		const result = await forAction(() => changePassword(user, input), { form: 'password' });
+		if (!result.ok) return result.failure;
+		await startSession(event.cookies, user.id);
+		redirect(303, `/account?ended=change&tokens=${result.value.tokens}`);
+	},
+	/**
+	 * Ends every session of the account and, when ticked, every API token. This browser gets a
+	 * fresh session (a new id), so the person who pressed the button stays signed in here only.
+	 */
+	everywhere: async (event) => {
+		const user = requireUser(event);
+		const revokeTokens = (await event.request.formData()).get('tokens') === 'on';
+		const ended = signOutEverywhere(user, revokeTokens);
+		await startSession(event.cookies, user.id);
+		redirect(303, `/account?ended=everywhere&tokens=${ended.tokens}`);
 	}
 };

@@ -3,12 +3,10 @@ import type { Actions, PageServerLoad } from './$types';
 import { checkPassword } from '$lib/server/services/users';
 import { startSession } from '$lib/server/session';
 import { forAction } from '$lib/server/http';
-
-/** Only same-site paths are followed after sign-in. */
-const safeNext = (next: string | null) => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/projects');
+import { safeNext } from '$lib/server/safe-redirect';
 
 export const load: PageServerLoad = ({ locals, url }) => {
-	if (locals.user) redirect(303, safeNext(url.searchParams.get('next')));
+	if (locals.user) redirect(303, safeNext(url.searchParams.get('next'), url.origin));
 };
 
 export const actions: Actions = {
@@ -20,6 +18,6 @@ export const actions: Actions = {
 		});
 		if (!result.ok) return result.failure;
 		await startSession(event.cookies, result.value.id);
-		redirect(303, safeNext(event.url.searchParams.get('next')));
+		redirect(303, safeNext(event.url.searchParams.get('next'), event.url.origin));
 	}
 };

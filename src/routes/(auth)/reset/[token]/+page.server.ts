@@ -11,7 +11,7 @@ export const actions: Actions = {
 		const password = String((await event.request.formData()).get('password') ?? '');
 		const result = await forAction(() => resetPassword(event.params.token, password));
 		if (!result.ok) return result.failure;
-		await startSession(event.cookies, result.value);
-		redirect(303, '/projects');
+		await startSession(event.cookies, result.value.userId);
+		redirect(303, `/account?ended=reset&tokens=${result.value.tokens}`);
 	}
 };

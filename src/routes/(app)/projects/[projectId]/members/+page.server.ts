@@ -1,5 +1,6 @@
+import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { addMember, changeMemberRole, listMembers, removeMember } from '$lib/server/services/projects';
+import { addMember, changeMemberRole, leaveProject, listMembers, removeMember } from '$lib/server/services/projects';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 
 export const load: PageServerLoad = (event) => {
@@ -15,7 +16,7 @@ export const actions: Actions = {
 		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: String(form.get('role') ?? '') }), {
 			email
 		});
-		return result.ok ? { added: result.value.name } : result.failure;
+		return result.ok ? { added: result.value.message } : result.failure;
 	},
 	role: async (event) => {
 		const user = requireUser(event);
@@ -30,5 +31,11 @@ export const actions: Actions = {
 		const form = await event.request.formData();
 		const result = await forAction(() => removeMember(user, event.params.projectId, String(form.get('userId') ?? '')));
 		return result.ok ? { removed: true } : result.failure;
+	},
+	leave: async (event) => {
+		const user = requireUser(event);
+		const result = await forAction(() => leaveProject(user, event.params.projectId));
+		if (!result.ok) return result.failure;
+		redirect(303, '/projects');
 	}
 };

@@ -8,9 +8,10 @@ export const GET: RequestHandler = api((event) =>
 
 export const POST: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
+	// 202: the same answer whether or not an account uses the e-mail (no account discovery).
 	return reply(
 		'POST /api/v1/projects/:projectId/members',
-		{ member: addMember(actor, event.params.projectId, await readJson(event)) },
-		{ status: 201 }
+		{ result: addMember(actor, event.params.projectId, await readJson(event)) },
+		{ status: 202 }
 	);
 });

@@ -1,0 +1,108 @@
+/**
+ * Transition finder, air/vacuum and Line matcher routes, as scripts use them (no sign-in). Check values name their sources.
+ */
+import { expect, test } from '@playwright/test';
+
+test.describe('GET /api/v1/transitions', () => {
+	test('3s → 3p: ²S–²P° with strengths 4 : 2, i.e. 2 : 1 (Condon & Shortley 1935 ch. IX)', async ({ request }) => {
+		const res = await request.get('/api/v1/transitions?lower=3s&upper=3p&types=E1');
+		expect(res.status()).toBe(200);
+		const body = await res.json();
+		expect(body.jump).toEqual({ from: '3s', to: '3p', deltaL: 1 });
+		expect(body.multiplets).toHaveLength(1);
+		expect(body.multiplets[0].label).toBe('²S–²P°');
+		expect(body.multiplets[0].lines.map((l: { JUpper: string; strength: { exact: string } }) => [l.JUpper, l.strength.exact])).toEqual([
+			['3/2', '4'],
+			['1/2', '2']
+		]);
+		expect(body.energies).toBe('unknown');
+		expect(body.caution).toMatch(/approximations/);
+	});
+
+	test('2p 3s → 2p 3p gives ³P°–³D with 84 : 45 : 20 : 15 : 15 : 1 (multiplet tables, from memory)', async ({ request }) => {
+		const body = await (
+			await request.get('/api/v1/transitions?' + new URLSearchParams({ lower: '2p 3s', upper: '2p 3p', types: 'E1' }))
+		).json();
+		const m = body.multiplets.find((x: { label: string }) => x.label === '³P°–³D');
+		expect(m.lsAllowed).toBe(true);
+		const scaled = m.lines
+			.map((l: { strength: { value: number } }) => Math.round(l.strength.value * 4))
+			.sort((a: number, b: number) => b - a);
+		expect(scaled).toEqual([84, 45, 20, 15, 15, 1]);
+		const ic = body.multiplets.find((x: { label: string }) => x.label === '³P°–¹D');
+		expect(ic).toMatchObject({ intercombination: true, lsAllowed: false });
+	});
+
+	test('bad input is a 400 that says what is allowed', async ({ request }) => {
+		const bad = await request.get('/api/v1/transitions?lower=3s&upper=3p&types=E3');
+		expect(bad.status()).toBe(400);
+		expect((await bad.json()).error.message).toMatch(/E1, M1, E2/);
+		const noUpper = await request.get('/api/v1/transitions?lower=3s');
+		expect((await noUpper.json()).error.message).toMatch(/"upper" is required/);
+		const notation = await request.get('/api/v1/transitions?lower=3s&upper=3p7');
+		expect(notation.status()).toBe(400);
+		expect((await notation.json()).error.token).toBe('3p7');
+	});
+});
+
+test.describe('GET /api/v1/airvac', () => {
+	test('Hα: 6564.61 Å vacuum ↔ 6562.80 Å air (from memory); the index is the Morton 2000 value at 6564.61 Å', async ({ request }) => {
+		const toAir = await (await request.get('/api/v1/airvac?vacuum=6564.61')).json();
+		expect(toAir.air).toBeCloseTo(6562.797, 3); // hand computation with bc from the Morton formula: 6562.79702
+		expect(toAir.refractiveIndex - 1).toBeCloseTo(2.7625e-4, 8);
+		const toVac = await (await request.get('/api/v1/airvac?air=6562.80')).json();
+		expect(toVac.vacuum).toBeCloseTo(6564.613, 2);
+	});
+	test('below 2000 Å there is no air wavelength, and exactly one parameter is needed', async ({ request }) => {
+		const low = await request.get('/api/v1/airvac?vacuum=1215.67');
+		expect(low.status()).toBe(400);
+		expect((await low.json()).error.message).toMatch(/vacuum by convention/);
+		const both = await request.get('/api/v1/airvac?vacuum=5000&air=5000');
+		expect((await both.json()).error.message).toMatch(/exactly one/);
+		const text = await request.get('/api/v1/airvac?air=red');
+		expect((await text.json()).error.message).toMatch(/positive number of ångström/);
+	});
+});
+
+test.describe('POST /api/v1/match', () => {
+	// Invented levels (cm⁻¹): an even ³P ground term and an odd ³D° term.
+	const levels = [
+		{ energy: 0, J: 0, parity: 'even', term: '3P', label: 'a 3P0', uncertainty: 0.02 },
+		{ energy: 140.25, J: 1, parity: 'even', term: '3P', label: 'a 3P1', uncertainty: 0.02 },
+		{ energy: 401.6, J: 2, parity: 'even', term: '3P', label: 'a 3P2', uncertainty: 0.02 },
+		{ energy: 30120.7, J: 1, parity: 'odd', term: '3D°', label: 'z 3D1', uncertainty: 0.02 },
+		{ energy: 30233.15, J: 2, parity: 'odd', term: '3D°', label: 'z 3D2', uncertainty: 0.02 },
+		{ energy: 30410.9, J: 3, parity: 'odd', term: '3D°', label: 'z 3D3', uncertainty: 0.02 }
+	];
+
+	test('finds the pair behind each line and ranks by |residual|; reports the unexplained line', async ({ request }) => {
+		// ³P₂–³D°₃: σ = 30410.9 − 401.6 = 30009.3 cm⁻¹, sent as a wavenumber; ³P₀–³D°₁: σ = 30120.7 cm⁻¹ as a vacuum wavelength.
+		const lines = [
+			{ wavelength: 30009.31, unit: 'cm-1', medium: 'vacuum', uncertainty: 0.01 },
+			{ wavelength: 1e8 / 30120.69, unit: 'A', medium: 'vacuum', uncertainty: 0.0002 },
+			{ wavelength: 4000, unit: 'A', medium: 'air', uncertainty: 0.001 }
+		];
+		const res = await request.post('/api/v1/match', { data: { levels, lines, types: ['E1'] } });
+		expect(res.status()).toBe(200);
+		const body = await res.json();
+		expect(body.matches[0].candidates[0]).toMatchObject({ lower: 2, upper: 5, type: 'E1' });
+		expect(body.matches[0].candidates[0].residual).toBeCloseTo(0.01, 6);
+		expect(body.matches[0].candidates[0].strength.exact).toBe('21'); // 84/4, strongest line of ³P–³D°
+		expect(body.matches[1].candidates[0]).toMatchObject({ lower: 0, upper: 3 });
+		expect(body.unexplained).toEqual([2]);
+		expect(body.caution).toMatch(/review/);
+		// With a fixed 0.001 cm⁻¹ tolerance the first line (residual 0.01) is no longer explained.
+		const tight = await (await request.post('/api/v1/match', { data: { levels, lines, tolerance: 0.001 } })).json();
+		expect(tight.unexplained).toContain(0);
+	});
+
+	test('names the field at fault', async ({ request }) => {
+		const res = await request.post('/api/v1/match', { data: { levels, lines: [{ wavelength: 5000, unit: 'parsec', medium: 'air' }] } });
+		expect(res.status()).toBe(400);
+		const body = await res.json();
+		expect(body.error.field).toBe('lines[0].unit');
+		expect(body.error.message).toMatch(/"A", "nm", "um", "cm-1"/);
+		const notJson = await request.post('/api/v1/match', { data: 'levels=1', headers: { 'content-type': 'application/json' } });
+		expect(notJson.status()).toBe(400);
+	});
+});
