@@ -156,7 +156,8 @@ test.describe('labels: parentage and jK', () => {
 				{ S: '2', L: 2 },
 				{ S: '5/2', L: 2 }
 			],
-			label: '3d⁶(⁵D)4s ⁶D'
+			label: '3d⁶(⁵D)4s ⁶D',
+			parent: '3d⁶(⁵D)4s'
 		});
 		expect(body.parentageStatus).toMatchObject({ listed: true, occurrences: 24 });
 		expect(body.hund.phrase).toBe("lowest level by Hund's rules (heuristic)");
@@ -181,4 +182,17 @@ test.describe('labels: parentage and jK', () => {
 		expect(res.status()).toBe(400);
 		expect((await res.json()).error.message).toMatch(/jK coupling needs one outer electron/);
 	});
+});
+
+test('in the built app, large computations run in a worker thread and small ones inline', async ({ request }) => {
+	// The bridge of 4f7 5d 6p lists every level on each side (tens of thousands; a second of work): worker pool.
+	const heavy = await request.get('/api/v1/bridge?config=' + encodeURIComponent('4f7 5d 6p'));
+	expect(heavy.status()).toBe(200);
+	expect(heavy.headers()['x-termwright-compute']).toBe('worker');
+	const body = await heavy.json();
+	expect(body.links.length).toBeGreaterThan(10000);
+	expect(body.links.length).toBe(body.ls.length); // every LS level is joined to one jj level of its J
+	expect(body.jj.length).toBe(body.ls.length);
+	const light = await request.get('/api/v1/terms?config=2p2');
+	expect(light.headers()['x-termwright-compute']).toBe('inline');
 });

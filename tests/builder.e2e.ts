@@ -1,5 +1,6 @@
 import { expect, test, type Locator, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
+import Papa from 'papaparse';
 import { shot } from './helpers';
 
 /*
@@ -26,13 +27,15 @@ async function drag(page: Page, from: Locator, to: Locator) {
 	await page.mouse.up();
 }
 
-/** The Term sheet shows 7S3 as Hund's ground level and 504 microstates. */
+/** The Term sheet shows 7S3 as the lowest level by Hund's rules (two open subshells: heuristic) and 504 microstates. */
 async function expectCr(page: Page) {
 	await expect(page.getByTestId('summary-microstates')).toHaveText('504');
 	const ground = page.locator('[data-testid="term-sheet"] tr[data-ground="true"]');
 	await expect(ground).toHaveCount(1);
-	await expect(ground).toHaveAttribute('data-level', '7S|3');
-	await expect(ground).toContainText('ground (Hund)');
+	await expect(ground).toHaveAttribute('data-level', '7S#1|3');
+	await expect(ground).toContainText('lowest (Hund, heuristic)');
+	// Hund order by default: the lowest level leads the sheet.
+	await expect(page.locator('[data-testid="term-sheet"] tbody tr').first()).toHaveAttribute('data-ground', 'true');
 	// Two open subshells: Hund's rules are a heuristic, said in amber.
 	await expect(page.getByTestId('hund-caution')).toBeVisible();
 	await expect(page.getByTestId('totals')).toContainText('504 microstates');
@@ -123,9 +126,9 @@ test('the Term sheet exports as CSV and LaTeX', async ({ page }) => {
 	expect(csv.suggestedFilename()).toBe('terms-3d5_4s.csv');
 	const csvText = readFileSync((await csv.path())!, 'utf8');
 	const lines = csvText.split(/\r?\n/);
-	expect(lines[0]).toBe('term,count,seniority,S,L,parity,J,g,g_decimal,weight');
-	// 7S3: S = 3, L = 0, J = 3, g_J = 2 (L = 0 gives g_J = g_s = 2), 2J+1 = 7.
-	expect(lines).toContain('7S,1,,3,0,even,3,2,2,7');
+	expect(lines[0]).toBe('term,occurrence,parentage,count,seniority,S,L,parity,J,g,g_decimal,weight');
+	// 7S3: S = 3, L = 0, J = 3, g_J = 2 (L = 0 gives g_J = g_s = 2), 2J+1 = 7; parent 3d⁵ ⁶S (Cr I, NIST ASD, from memory).
+	expect(lines).toContain('7S,1,3d⁵(⁶S)4s ⁷S,1,,3,0,even,3,2,2,7');
 
 	const [tex] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'LaTeX', exact: true }).click()]);
 	expect(tex.suggestedFilename()).toBe('terms-3d5_4s.tex');
@@ -180,4 +183,50 @@ test('on a touch screen, taps add chips and step the occupancy (tablet width)', 
 	await expectCr(page);
 	await shot(page, 'builder-tablet-touch');
 	await context.close();
+});
+
+test.describe('labels as the trade writes them', () => {
+	test('Fe II 3d6 4s: every term with its parent; typing 3d6(5D) 4s keeps only ⁶D and ⁴D', async ({ page }) => {
+		// Fe II a⁶D and a⁴D are 3d⁶(⁵D)4s (NIST ASD, from memory); 24 term occurrences (d⁶ × s).
+		await page.goto('/builder?config=' + encodeURIComponent('[Ar] 3d6 4s'));
+		const sheet = page.getByTestId('term-sheet');
+		await expect(sheet.getByTestId('parent-cell').first()).toHaveText('3d⁶(⁵D)4s');
+		await expect(sheet.getByTestId('parent-cell')).toHaveCount(24);
+		await expect(page.getByTestId('parent-note')).toContainText('seniority');
+		// The parent filter keeps the terms on ³H: ⁴H and ²H.
+		await page.getByTestId('parent-filter').selectOption({ label: '3d⁶(³H)' });
+		await expect(sheet.getByTestId('parent-cell')).toHaveCount(2);
+		await shot(page, 'builder-parents');
+
+		await page.getByLabel('Notation').fill('[Ar] 3d6(5D) 4s');
+		await expect(page.getByTestId('typed-parents')).toBeVisible();
+		await page.getByRole('button', { name: 'clear' }).click();
+		await expect(sheet.getByTestId('parent-cell')).toHaveCount(2);
+		await expect(sheet.locator('tbody tr[data-level="6D#1|9/2"]')).toBeVisible();
+		await expect(sheet.locator('tbody tr[data-level="4D#1|7/2"]')).toBeVisible();
+	});
+
+	test('odd configurations: every level in the Term sheet, its export and the summary carries °', async ({ page }) => {
+		// 3d⁵4s4p is odd (Σl = 11); Mn I z⁸P° (NIST ASD, from memory).
+		await page.goto('/builder?config=' + encodeURIComponent('3d5 4s 4p'));
+		const sheet = page.getByTestId('term-sheet');
+		await expect(sheet.locator('tbody tr').first()).toBeVisible();
+		const symbols = await sheet.locator('tbody .term-symbol').allTextContents();
+		expect(symbols.length).toBeGreaterThan(10);
+		for (const s of symbols) expect(s).toContain('°');
+		const parents = await sheet.getByTestId('parent-cell').allTextContents();
+		expect(parents).toContain('3d⁵(⁶S)4s(⁷S)4p');
+		await expect(page.getByTestId('summary-ground')).toContainText('°');
+		await expect(page.getByTestId('summary-ground')).toContainText("lowest level by Hund's rules");
+
+		const [csv] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'CSV', exact: true }).click()]);
+		const parsed = Papa.parse<string[]>(readFileSync((await csv.path())!, 'utf8').trim());
+		const rows = parsed.data.slice(1);
+		expect(rows.length).toBeGreaterThan(10);
+		for (const row of rows) {
+			const [term, , parentage] = row;
+			expect(term).toMatch(/°$/);
+			expect(parentage).toMatch(/°$/);
+		}
+	});
 });

@@ -86,7 +86,7 @@ test.describe('Builder pictures', () => {
 		const svg = panel.getByTestId('level-diagram-svg');
 		await expect(svg).toBeVisible();
 		// Terms of p²: ³P, ¹D, ¹S (Condon & Shortley 1935, table 1⁷); Hund's order ³P < ¹D < ¹S, ground ³P₀ (less than half full).
-		await expect(svg).toHaveAttribute('aria-label', /³P, ¹D, ¹S\. Ground level by Hund's rules ³P₀/);
+		await expect(svg).toHaveAttribute('aria-label', /³P, ¹D, ¹S\. Ground level by Hund's rules: ³P₀/);
 		const items = panel.getByTestId('level-diagram-list').locator('li');
 		await expect(items).toHaveCount(3);
 		await expect(items.nth(0)).toContainText('³P: J = 0, 1, 2');

@@ -106,3 +106,35 @@ test.describe('POST /api/v1/match', () => {
 		expect(notJson.status()).toBe(400);
 	});
 });
+
+test.describe('Transition finder screen', () => {
+	test('2p² → 2p 3s: multiplets grouped with strengths, intercombination flagged, export and address kept', async ({ page }) => {
+		await page.goto('/transitions?lower=2p2&upper=2p%203s&types=E1');
+		const table = page.getByTestId('transition-table');
+		await expect(table).toBeVisible();
+		// ³P–³P°: six lines (9 J pairs less 0–0, 0–2, 2–0: the J rules of Condon & Shortley 1935).
+		const rows = table.locator('tr[data-multiplet="³P–³P°"]');
+		await expect(rows).toHaveCount(6);
+		await expect(table.locator('tr[data-multiplet="³P–¹P°"]').first()).toContainText('intercombination');
+		await expect(page.getByTestId('finder-summary')).toContainText('jump 2p → 3s');
+		await page.screenshot({ path: 'tests/screenshots/transition-finder.png', fullPage: true });
+
+		const download = page.waitForEvent('download');
+		await page.getByRole('button', { name: 'CSV' }).click();
+		const file = await download;
+		expect(file.suggestedFilename()).toBe('transitions-2p2-2p_3s.csv');
+
+		await page.getByLabel('Upper configuration').fill('2p3');
+		await expect(page.getByTestId('finder-error')).toHaveText('');
+		await page.getByLabel('Upper configuration').fill('2p 3s7');
+		await expect(page.getByTestId('finder-error')).toContainText('3s7');
+		await expect(page.getByLabel('Upper configuration')).toHaveAttribute('aria-invalid', 'true');
+		await expect(page).toHaveURL(/upper=2p\+3s7/);
+	});
+
+	test('is linked from the top bar', async ({ page }) => {
+		await page.goto('/basis');
+		await page.getByRole('link', { name: 'Transition finder' }).click();
+		await expect(page).toHaveURL(/\/transitions/);
+	});
+});

@@ -30,6 +30,18 @@ const LISTED: Listed = {
 	'GET /api/v1/wigner': { summary: 'Wigner 3j/6j/9j or Clebsch–Gordan: ?symbol=6j&args=1,1,1,1,1,1', access: 'public' },
 	'GET /api/v1/species': { summary: 'ground configuration of an atom or ion: ?name=Fe II', access: 'public' },
 	'GET /api/v1/microstates': { summary: 'explicit microstates, a page at a time: ?config=2p2&offset=0&limit=50', access: 'public' },
+	'POST /api/v1/energies': {
+		summary: 'intermediate-coupling levels { config, parameters: { Eav, F: [{ k, a, b, value }], G, zeta: [{ shell, value }] }, gs? }',
+		access: 'public'
+	},
+	'POST /api/v1/energies/sweep': {
+		summary: 'LS → jj sweep of the levels: the same body plus points (2–201, default 61)',
+		access: 'public'
+	},
+	'POST /api/v1/fit': {
+		summary: 'least-squares fit { config, parameters, vary, links?, bounds?, observed: [{ J, energy, uncertainty?, assign? }] }',
+		access: 'public'
+	},
 	'GET /api/v1/transitions': {
 		summary: 'Transition finder: multiplets and LS strengths: ?lower=2p2&upper=2p 3s&types=E1,M1,E2',
 		access: 'public'

@@ -8,6 +8,9 @@
 import type { TermSheet } from '$lib/physics/report';
 import type { ExactJson } from '$lib/physics/exact';
 import type { JjLabelPiece } from '$lib/physics/jj';
+import type { IcResult } from '$lib/physics/levels-ic';
+import type { SweepResult } from '$lib/physics/sweep';
+import type { FitResult } from '$lib/physics/fit';
 import type { FinderResult } from '$lib/physics/finder';
 import type { MatchResult, Tolerance } from '$lib/physics/matcher';
 import type { TransitionType } from '$lib/physics/transitions';
@@ -180,6 +183,17 @@ export interface AnnotationJson {
 	updatedBy: string | null;
 }
 
+/** Determinant budgets of one Energy solver request. */
+export interface EnergyLimits {
+	maxBlock: number;
+	maxTotal: number;
+}
+
+/** POST /api/v1/energies: levels sorted by energy, components under 0.01 % left out. */
+export type EnergiesResponse = IcResult & { limits: EnergyLimits };
+export type EnergySweepResponse = SweepResult & { limits: EnergyLimits };
+export type FitResponse = FitResult & { limits: EnergyLimits };
+
 /**
  * The response body of each route, keyed "METHOD /path" exactly as in `API_ROUTES` (./routes).
  * Routes that answer 204 or a file map to `null`.
@@ -194,6 +208,9 @@ export interface ApiResponses {
 	'GET /api/v1/wigner': WignerResponse;
 	'GET /api/v1/species': SpeciesResponse;
 	'GET /api/v1/microstates': MicrostatesResponse;
+	'POST /api/v1/energies': EnergiesResponse;
+	'POST /api/v1/energies/sweep': EnergySweepResponse;
+	'POST /api/v1/fit': FitResponse;
 	'GET /api/v1/transitions': TransitionsResponse;
 	'GET /api/v1/airvac': AirvacResponse;
 	'POST /api/v1/match': MatchResponse;

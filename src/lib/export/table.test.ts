@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { csvSafeCell, latexConfiguration, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
-import { levelColumns, levelRows } from './term-sheet';
+import { latexLabel, levelColumns, levelRows } from './term-sheet';
 import { termSheet } from '../physics/report';
 
 type Row = { name: string; value: number | null };
@@ -68,14 +68,22 @@ describe('exports', () => {
 		expect(latexTerm(4, 'F', '3/2', true)).toBe('$^{4}\\mathrm{F}^{\\circ}_{3/2}$');
 	});
 
-	it('the Term sheet export of 3d5 4s has one row per J of each term and the ⁷S₃ row with g = 2', () => {
-		// ⁷S₃: g = 2 exactly for L = 0 (Landé formula). Repeated terms keep one row with their count.
+	it('the Term sheet export of 3d5 4s has one row per J of each term occurrence and the ⁷S₃ row with g = 2', () => {
+		// ⁷S₃: g = 2 exactly for L = 0 (Landé formula); Cr I ground 3d⁵(⁶S)4s ⁷S₃ (NIST ASD, from memory).
 		const sheet = termSheet('3d5 4s');
 		const rows = levelRows(sheet);
-		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + t.levels.length, 0));
+		expect(rows).toHaveLength(sheet.terms.reduce((n, t) => n + Number(t.count) * t.levels.length, 0));
 		const csv = toCsv(rows, levelColumns);
-		expect(csv.split('\r\n')[0]).toBe('term,count,seniority,S,L,parity,J,g,g_decimal,weight');
-		expect(csv).toContain('7S,1,,3,0,even,3,2,2,7');
+		expect(csv.split('\r\n')[0]).toBe('term,occurrence,parentage,count,seniority,S,L,parity,J,g,g_decimal,weight');
+		expect(csv).toContain('7S,1,3d⁵(⁶S)4s ⁷S,1,,3,0,even,3,2,2,7');
+	});
+
+	it('odd terms carry ° in the export, and parentage labels become LaTeX: 2p3 and 3d5 4s 4p', () => {
+		// N I 2p³ ⁴S° (NIST ASD); LaTeX superscripts as in any typeset table (common practice, no source).
+		const csv = toCsv(levelRows(termSheet('2p3')), levelColumns);
+		expect(csv).toContain('4S°,1,2p³ ⁴S°');
+		expect(latexLabel('3d⁵(⁶S)4s(⁷S)4p ⁸P°')).toBe('3d$^{5}$($^{6}$S)4s($^{7}$S)4p $^{8}$P$^{\\circ}$');
+		expect(latexLabel('2p⁵(²P°₃/₂)3p ²[5/2]₃')).toBe('2p$^{5}$($^{2}$P$^{\\circ}$$_{3/2}$)3p $^{2}$[5/2]$_{3}$');
 	});
 
 	// longtable package manual (Carlisle): \endfirsthead, \endhead, \endfoot, \endlastfoot.

@@ -51,12 +51,16 @@ export function jjSpinOrbitWeight(level: JjLevel): number {
 
 /**
  * Correlates LS and jj levels of equal J by the non-crossing rule (see the module comment).
- * Throws what jjLevels throws (too many levels) or ConfigurationError for bad input, and an
+ * Throws what jjLevels throws (over MAX_JJ_LEVELS levels, checked before any list is built) or
+ * ConfigurationError for bad input, and an
  * Error when the J counts of the two sides differ (which would be a bug).
  * @example couplingBridge(parseConfiguration('2p 3p')).links.length // 10
  */
 export function couplingBridge(input: Configuration | readonly Subshell[]): CouplingBridge {
 	const subshells = asSubshells(input);
+	// jjLevels checks its output budget (MAX_JJ_LEVELS) before listing; the LS side has as many
+	// levels, so it is built only after that check.
+	const jjList = jjLevels(subshells);
 	const ls: BridgeLsLevel[] = [];
 	for (const t of hundOrder(subshells)) {
 		for (let k = 1; k <= t.term.count; k++) {
@@ -65,7 +69,7 @@ export function couplingBridge(input: Configuration | readonly Subshell[]): Coup
 			}
 		}
 	}
-	const jj: BridgeJjLevel[] = jjLevels(subshells)
+	const jj: BridgeJjLevel[] = jjList
 		.map((level) => ({ label: level.label, twoJ: level.twoJ, spinOrbitWeight: jjSpinOrbitWeight(level), level }))
 		.sort((a, b) => a.spinOrbitWeight - b.spinOrbitWeight || a.twoJ - b.twoJ);
 

@@ -74,19 +74,36 @@ export function clearEnergyCache(): void {
 	cache.clear();
 }
 
-function gramRows(X: Float64Array, Y: Float64Array, k: number, n: number): Float64Array {
-	// X (k × n), Y (k × n) → X Yᵀ (k × k)
-	const out = new Float64Array(k * k);
-	for (let a = 0; a < k; a++) {
-		for (let b = 0; b < k; b++) {
-			let s = 0;
-			const xa = a * n;
-			const yb = b * n;
-			for (let i = 0; i < n; i++) s += X[xa + i] * Y[yb + i];
-			out[a * k + b] = s;
-		}
+/**
+ * V H_p Vᵀ for every parameter p, with V the dim × n basis (rows) and H_p the sparse upper-triangle
+ * entries. Works column-major (n × dim) so that every inner loop runs over contiguous memory.
+ */
+function projectParameters(m: ParameterMatrices, basis: Float64Array, dim: number, n: number): Float64Array[] {
+	const Vt = new Float64Array(n * dim);
+	for (let a = 0; a < dim; a++) for (let i = 0; i < n; i++) Vt[i * dim + a] = basis[a * n + i];
+	const T = m.params.map(() => new Float64Array(n * dim));
+	const { rows, cols, coef, param } = m;
+	for (let e = 0; e < rows.length; e++) {
+		const r = rows[e] * dim;
+		const c = cols[e] * dim;
+		const v = coef[e];
+		const t = T[param[e]];
+		for (let a = 0; a < dim; a++) t[c + a] += v * Vt[r + a];
+		if (r !== c) for (let a = 0; a < dim; a++) t[r + a] += v * Vt[c + a];
 	}
-	return out;
+	return T.map((t) => {
+		const P = new Float64Array(dim * dim);
+		for (let i = 0; i < n; i++) {
+			const o = i * dim;
+			for (let a = 0; a < dim; a++) {
+				const va = Vt[o + a];
+				if (va === 0) continue;
+				const pa = a * dim;
+				for (let b = 0; b < dim; b++) P[pa + b] += va * t[o + b];
+			}
+		}
+		return P;
+	});
 }
 
 function nearestTwoK(x: number, what: string): number {
@@ -242,21 +259,7 @@ export function energyStructure(
 		const basis = new Float64Array(dim * n);
 		members.forEach((m, r) => basis.set(m.vec, r * n));
 		const lsOf = Int32Array.from(members.map((m) => m.cls));
-		// T_p = V_J H_p (rows), then V_J T_pᵀ.
-		const T = params.map(() => new Float64Array(dim * n));
-		for (let e = 0; e < matrices.rows.length; e++) {
-			const r = matrices.rows[e];
-			const c = matrices.cols[e];
-			const v = matrices.coef[e];
-			const t = T[matrices.param[e]];
-			for (let a = 0; a < dim; a++) {
-				const o = a * n;
-				t[o + c] += v * basis[o + r];
-				if (r !== c) t[o + r] += v * basis[o + c];
-			}
-		}
-		const param = T.map((t, p) => {
-			const P = gramRows(basis, t, dim, n);
+		const param = projectParameters(matrices, basis, dim, n).map((P, p) => {
 			for (let a = 0; a < dim; a++) P[a * dim + a] -= matrices.average[p];
 			// symmetrise against rounding
 			for (let a = 0; a < dim; a++)

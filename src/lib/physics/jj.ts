@@ -14,6 +14,7 @@ import type { Configuration, Subshell } from './types';
 import { halfString } from './half';
 import { lLetter } from './letters';
 import { asSubshells, subshellCapacity } from './parse';
+import { BIGINT_COST_FACTOR, checkBudget, gridExtent, MAX_GRID_WORK } from './budget';
 
 /** Most levels `jjLevels` will list for one configuration; counts of any size come from `jjLevelCountsByJ`. */
 export const MAX_JJ_LEVELS = 20000;
@@ -248,6 +249,12 @@ function toSafe(n: bigint, twoJ: number): number {
  */
 export function jjLevelCountsByJ(input: Configuration | readonly Subshell[]): Map<number, number> {
 	const subshells = asSubshells(input);
+	checkBudget(
+		'the jj counting work of this configuration (operations)',
+		jjCountWork(subshells),
+		MAX_GRID_WORK,
+		'use fewer or less-filled open subshells'
+	);
 	let total: JTable = new Map([[0, 1n]]);
 	for (const s of subshells) {
 		if (s.occupancy === subshellCapacity(s.l)) continue;
@@ -256,6 +263,24 @@ export function jjLevelCountsByJ(input: Configuration | readonly Subshell[]): Ma
 	const out = new Map<number, number>();
 	for (const [j, n] of [...total].sort((a, b) => a[0] - b[0])) if (n > 0n) out.set(j, toSafe(n, j));
 	return out;
+}
+
+/**
+ * Upper bound of the BigInt multiply-adds of `jjLevelCountsByJ`: coupling J tables of sizes
+ * a and b costs at most a·b·(min span + 1); a subshell's 2J is at most 2·maxM_L + 2·maxM_S.
+ */
+function jjCountWork(subshells: readonly Subshell[]): number {
+	let runningTwoJ = 0;
+	let work = 0;
+	for (const s of subshells) {
+		if (s.occupancy === subshellCapacity(s.l)) continue;
+		const e = gridExtent([s]);
+		const twoJ = 2 * e.maxML + e.maxTwoMS;
+		const inner = (twoJ / 2 + 1) * (twoJ / 2 + 1) * (twoJ + 1); // the subshell's own distributions
+		work += inner + (runningTwoJ / 2 + 1) * (twoJ / 2 + 1) * (Math.min(runningTwoJ, twoJ) + 1);
+		runningTwoJ += twoJ;
+	}
+	return work * BIGINT_COST_FACTOR;
 }
 
 /**

@@ -15,6 +15,8 @@ export interface ParentageItem {
 	intermediates: { S: string; L: number }[];
 	/** "3d⁶(⁵D)4s ⁶D". */
 	label: string;
+	/** The label before the final term, "3d⁶(⁵D)4s"; one open subshell: the subshell and which repeat, "3d³ (v=1)". */
+	parent: string;
 	/** Present when parents were typed with the configuration: whether this occurrence is built on them. */
 	onTypedParents?: boolean;
 }
@@ -62,6 +64,7 @@ export function parentageItems(cfg: Configuration, occurrences: number): { byTer
 			})),
 			intermediates: p.intermediates.map((m) => ({ S: halfString(m.twoS), L: m.L })),
 			label: p.label,
+			parent: p.tell ? `${p.prefix} (${p.tell})` : p.prefix,
 			...(typed ? { onTypedParents: typed[i] } : {})
 		};
 		byTerm.set(key, [...(byTerm.get(key) ?? []), item]);

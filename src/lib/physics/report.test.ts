@@ -118,7 +118,8 @@ describe('Term sheet labels and parentage', () => {
 					{ S: '2', L: 2 },
 					{ S: '5/2', L: 2 }
 				],
-				label: '3d⁶(⁵D)4s ⁶D'
+				label: '3d⁶(⁵D)4s ⁶D',
+				parent: '3d⁶(⁵D)4s'
 			}
 		]);
 		expect(s.terms.every((t) => t.parentage!.length === Number(t.count))).toBe(true);

@@ -22,12 +22,21 @@ import {
 	type Rational
 } from './exact';
 import { halfString, parseHalf } from './half';
+import { BudgetError } from './budget';
 
 // ---------------------------------------------------------------- validation
 
+/**
+ * Work budget of the exact symbols: every j is at most MAX_J_SYMBOL (9j: MAX_J_9J), checked
+ * before any factorial is formed (the BigInt factorials grow with j; see ./budget.ts).
+ */
 function checkJ(where: string, name: string, tj: number): void {
 	if (!Number.isInteger(tj) || tj < 0) {
 		throw new RangeError(`${where}: ${name} must be given as twice its value, a non-negative integer (j = 0, 1/2, 1, …), got ${tj}`);
+	}
+	const max = where === 'wigner9j' ? MAX_J_9J : MAX_J_SYMBOL;
+	if (tj > 2 * max) {
+		throw new BudgetError(`${where}: ${name} = ${halfString(tj)} is over the limit of j = ${max} for exact evaluation`, tj / 2, max);
 	}
 }
 

@@ -1,6 +1,7 @@
 import type { RequestHandler } from './$types';
-import { evaluateSymbol, MAX_J_SYMBOL, MAX_J_9J } from '$lib/physics/wigner';
-import { api, queryParam, reply } from '$lib/server/http';
+import { MAX_J_SYMBOL, MAX_J_9J } from '$lib/physics/wigner';
+import { api, queryParam } from '$lib/server/http';
+import { computeResponse } from '$lib/server/compute/pool';
 import { ServiceError } from '$lib/server/errors';
 
 const KINDS = ['3j', '6j', '9j', 'cg'] as const;
@@ -16,6 +17,5 @@ export const GET: RequestHandler = api((event) => {
 	const args = queryParam(event, 'args', 200)
 		.split(',')
 		.map((s) => s.trim());
-	const v = evaluateSymbol(symbol as (typeof KINDS)[number], args);
-	return reply('GET /api/v1/wigner', { symbol: v.kind, args, value: v.value, exact: v.exact, text: v.text });
+	return computeResponse('wigner', { symbol: symbol as (typeof KINDS)[number], args });
 });

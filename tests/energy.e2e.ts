@@ -1,0 +1,52 @@
+import { expect, test } from '@playwright/test';
+import { shot } from './helpers';
+
+/*
+ * Reference values for 3d² with ζ = 0: ³F = A − 8B and ³P = A + 7B, so ³P lies 15B above ³F
+ * (Racah 1942; Griffith 1961, Table A20). Hund's rules give ³F₂ as the lowest level of d².
+ */
+
+test('Energy solver: 3d2 levels with a literature starting set, the 15B gap of ³P, the picture and the caution', async ({ page }) => {
+	await page.goto('/builder?config=3d2');
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	const rows = page.locator('[data-testid="energy-levels"] tbody tr');
+	await expect(rows).toHaveCount(9);
+	await expect(page.getByTestId('energy-preset')).toHaveValue('v3-3d2');
+	await expect(page.getByTestId('energy-preset-note')).toContainText('quoted from memory');
+	await expect(rows.first()).toHaveAttribute('data-label', '3F');
+	await expect(rows.first()).toHaveAttribute('data-j', '2');
+	await expect(page.getByTestId('energy-caution')).toContainText('not measurements');
+	await expect(page.getByTestId('energy-picture')).toBeVisible();
+
+	// Without spin–orbit every level of a term sits at the term energy.
+	await page.getByTestId('param-zeta(3d)').fill('0');
+	const p0 = page.locator('[data-testid="energy-levels"] tbody tr[data-label="3P"][data-j="0"] td').nth(1);
+	await expect(async () => {
+		const racah = await page.getByTestId('racah-3d').innerText();
+		const B = Number(/B = ([\d.]+)/.exec(racah)![1]);
+		expect(Math.abs(Number(await p0.innerText()) - 15 * B)).toBeLessThan(0.2);
+	}).toPass();
+
+	// Scaling F^k to 80 % scales B and the gap with it.
+	await page.getByTestId('energy-scale').fill('80');
+	await expect(page.getByTestId('racah-3d')).toContainText('B = 688.8');
+	await expect(async () => expect(Math.abs(Number(await p0.innerText()) - 15 * 688.8)).toBeLessThan(0.2)).toPass();
+	await shot(page, 'energy-solver-3d2');
+});
+
+test('Energy solver API: 400s name the impossible integral and the size limit', async ({ request }) => {
+	let res = await request.post('/api/v1/energies', { data: { config: '3d2', parameters: { F: [{ k: 3, a: '3d', b: '3d', value: 1 }] } } });
+	expect(res.status()).toBe(400);
+	expect((await res.json()).error.message).toMatch(/F\^3\(3d,3d\) cannot occur/);
+	res = await request.post('/api/v1/energies', { data: { config: '4f7 5d' } });
+	expect(res.status()).toBe(400);
+	expect((await res.json()).error.message).toMatch(/at most \d+/);
+	res = await request.post('/api/v1/fit', { data: { config: '3d2', vary: ['Eav', 'F2(3d,3d)'], observed: [{ J: '2', energy: 0 }] } });
+	expect(res.status()).toBe(400);
+	expect((await res.json()).error.message).toMatch(/needs at least as many observed levels as free parameters/);
+	res = await request.post('/api/v1/energies/sweep', {
+		data: { config: '2p2', parameters: { zeta: [{ shell: '2p', value: 100 }] }, points: 5 }
+	});
+	expect(res.status()).toBe(200);
+	expect((await res.json()).t).toEqual([0, 0.25, 0.5, 0.75, 1]);
+});
