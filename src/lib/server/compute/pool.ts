@@ -49,9 +49,11 @@ function workerEntry(): { filename: string; execArgv: string[] } | null {
 }
 
 let pool: Piscina | null | undefined;
+let closing = false;
 
 function getPool(): Piscina | null {
 	if (pool !== undefined) return pool;
+	closing = false;
 	const entry = workerEntry();
 	if (!entry) {
 		if (process.env.COMPUTE_POOL !== 'off')
@@ -73,6 +75,7 @@ function getPool(): Piscina | null {
 
 /** Ends the pool's threads (tests; shutdown). */
 export async function closeComputePool(): Promise<void> {
+	closing = true;
 	const p = pool;
 	pool = undefined;
 	if (p) await p.destroy();
@@ -118,6 +121,7 @@ export async function compute<N extends TaskName>(
 			};
 		if (/queue is at limit/i.test(err?.message ?? ''))
 			return { where, status: 503, body: errorBody('the server is busy with other computations; try again in a moment') };
+		if (closing) return { where, status: 503, body: errorBody('the server is shutting down; try again in a moment') };
 		console.error(`compute task ${name} failed`, e);
 		return { where, status: 500, body: errorBody('the computation failed on the server (an internal error); it has been logged') };
 	}

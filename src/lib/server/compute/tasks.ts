@@ -4,7 +4,7 @@
  * it and hand back one string (no large object crosses threads, and no JSON is written on the
  * request thread). The same functions run inline for light requests: `light(args)` says, from a
  * closed-form estimate, whether a task is cheap enough (well under ~50 ms) to run on the
- * request thread. Engine errors that mean bad input (ConfigurationError, SpeciesError,
+ * request thread. Engine errors that mean bad input (InputError such as ConfigurationError,
  * RangeError, including the engine's BudgetError) become a 400 in the API's error shape.
  *
  * This module may import only the engine and plain packages: it is bundled for the worker
@@ -22,8 +22,7 @@ import { exactJson } from '../../physics/exact';
 import { evaluateSymbol, type SymbolKind } from '../../physics/wigner';
 import { gridExtent, gridWork, seniorityWork, sheetLevelRowsBound } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
-import { ConfigurationError } from '../../physics/parse';
-import { SpeciesError } from '../../physics/elements';
+import { InputError } from '../../physics/input-error';
 
 /** A finished answer: HTTP status and the JSON body as text. */
 export interface TaskResult {
@@ -168,6 +167,17 @@ export const TASKS = { terms, jj, bridge, basis, wigner } as const;
 export type TaskName = keyof typeof TASKS;
 export type TaskArgs<N extends TaskName> = Parameters<(typeof TASKS)[N]['run']>[0];
 
+/** Recent answers (the engine is pure, so an answer never goes stale): at most CACHE_ENTRIES, small bodies only. */
+const answers = new Map<string, string>();
+const CACHE_ENTRIES = 500;
+const CACHE_BODY_CHARS = 200_000;
+
+function remember(key: string, body: string): void {
+	if (body.length > CACHE_BODY_CHARS) return;
+	answers.set(key, body);
+	if (answers.size > CACHE_ENTRIES) answers.delete(answers.keys().next().value!);
+}
+
 /** The API's error body (`{ "error": { "message", … } }`) as text. */
 export function errorBody(message: string, details: Record<string, unknown> = {}): string {
 	return JSON.stringify({ error: { message, ...details } });
@@ -180,11 +190,19 @@ export function errorBody(message: string, details: Record<string, unknown> = {}
 export function runTask<N extends TaskName>(name: N, args: TaskArgs<N>): TaskResult {
 	const task = TASKS[name] as ComputeTask<TaskArgs<N>>;
 	if (!task) return { status: 400, body: errorBody(`unknown compute task "${String(name)}"`) };
+	const key = `${String(name)} ${JSON.stringify(args)}`;
+	const hit = answers.get(key);
+	if (hit !== undefined) {
+		answers.delete(key); // most recently used last
+		answers.set(key, hit);
+		return { status: 200, body: hit };
+	}
 	try {
-		return { status: 200, body: JSON.stringify(task.run(args)) };
+		const body = JSON.stringify(task.run(args));
+		remember(key, body);
+		return { status: 200, body };
 	} catch (e) {
-		if (e instanceof ConfigurationError || e instanceof SpeciesError)
-			return { status: 400, body: errorBody(e.message, { token: e.token }) };
+		if (e instanceof InputError) return { status: 400, body: errorBody(e.message, { token: e.token }) };
 		if (e instanceof RangeError) return { status: 400, body: errorBody(e.message) };
 		throw e;
 	}
