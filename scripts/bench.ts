@@ -1,12 +1,22 @@
-// `npm run bench`: the term engine's speed and memory figures (not tests; they depend on the machine).
-import { main as benchTerms } from './bench-terms';
-import { main as benchMatcher } from './bench-matcher';
+// `npm run bench`: every benchmark's detail, then one summary table (medians, ratios against the
+// naive methods). Not tests: the figures depend on the machine and on what else runs on it.
+// A benchmark registers by exporting `run(): Promise<SummaryRow[]>` (see ./bench-summary.ts) and
+// being listed here; a module with only `main()` is run for its detail and adds no summary rows.
+import { printSummary, type SummaryRow } from './bench-summary';
 
-console.log('== Term engine: generating-function counting against explicit enumeration ==');
-benchTerms();
-console.log('\n== Exact Wigner symbols at the API limits, and jj levels ==');
-await import('./bench-wigner');
-console.log('\n== Energy solver: intermediate-coupling levels ==');
-(await import('./bench-energy')).main();
-console.log('\n== Line matcher: sorted transitions and binary search against brute force ==');
-benchMatcher();
+const BENCHES: { title: string; load: () => Promise<{ run?: () => Promise<SummaryRow[]>; main?: () => unknown }> }[] = [
+	{ title: 'Term engine: generating-function counting against explicit enumeration', load: () => import('./bench-terms') },
+	{ title: 'Exact Wigner symbols at the API limits, jj levels, Term sheets near the budget', load: () => import('./bench-wigner') },
+	{ title: 'Energy solver: intermediate-coupling levels', load: () => import('./bench-energy') },
+	{ title: 'Line matcher: sorted transitions and binary search against brute force', load: () => import('./bench-matcher') }
+];
+
+const rows: SummaryRow[] = [];
+for (const [i, b] of BENCHES.entries()) {
+	console.log(`${i ? '\n' : ''}== ${b.title} ==`);
+	const mod = await b.load();
+	if (mod.run) rows.push(...(await mod.run()));
+	else await mod.main?.();
+}
+console.log(`\n== Summary (Node ${process.version}; medians in ms; ratio = naive ÷ ours) ==`);
+printSummary(rows);

@@ -50,3 +50,26 @@ test('Energy solver API: 400s name the impossible integral and the size limit', 
 	expect(res.status()).toBe(200);
 	expect((await res.json()).t).toEqual([0, 0.25, 0.5, 0.75, 1]);
 });
+
+test('Energy solver: LS → jj curves and a fit to three invented ³F levels', async ({ page }) => {
+	await page.goto('/builder?config=3d2');
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	await expect(page.locator('[data-testid="energy-levels"] tbody tr')).toHaveCount(9);
+	await page.getByLabel('show LS → jj curves').check();
+	// one curve per level (9 for d²)
+	await expect(page.locator('[data-testid="energy-sweep"] polyline')).toHaveCount(9);
+
+	// Invented observed ³F levels; varying E_av and ζ only (2 free parameters, 3 levels, 1 degree of freedom).
+	await page.getByTestId('fit-observed').fill('2 1000 1 3F\n3 1190 1 3F\n4 1440 1 3F');
+	for (const id of ['F2(3d,3d)', 'F4(3d,3d)']) await page.getByRole('checkbox', { name: id }).uncheck();
+	await page.getByTestId('fit-run').click();
+	const report = page.getByTestId('fit-report');
+	await expect(report).toContainText('1 degrees of freedom');
+	await expect(report.locator('tbody tr')).toHaveCount(4 + 3);
+
+	// Too few levels for the free parameters: the server says so.
+	await page.getByTestId('fit-observed').fill('2 1000');
+	await page.getByTestId('fit-run').click();
+	await expect(page.getByTestId('fit-error')).toContainText('needs at least as many observed levels as free parameters');
+	await shot(page, 'energy-solver-fit');
+});

@@ -3,7 +3,7 @@
  * over later. POST bodies as in src/lib/server/energy-validation.ts; failures throw ApiError.
  */
 import { ApiError, apiUrl, readApi } from '$lib/api/client';
-import type { EnergiesResponse, GsChoice } from '$lib/api/types';
+import type { ApiResponses, GsChoice } from '$lib/api/types';
 
 export interface EnergyParametersBody {
 	Eav?: number;
@@ -12,14 +12,13 @@ export interface EnergyParametersBody {
 	zeta?: { shell: string; value: number }[];
 }
 
-/** POST /api/v1/energies. An abort rethrows the AbortError; a network failure becomes ApiError status 0. */
-export async function postEnergies(
-	body: { config: string; parameters: EnergyParametersBody; gs: GsChoice },
-	signal?: AbortSignal
-): Promise<EnergiesResponse> {
+type PostKey = 'POST /api/v1/energies' | 'POST /api/v1/energies/sweep' | 'POST /api/v1/fit';
+
+/** POST a JSON body to one of the Energy solver routes. An abort rethrows the AbortError; a network failure becomes ApiError status 0. */
+async function post<K extends PostKey>(route: K, body: unknown, signal?: AbortSignal): Promise<ApiResponses[K]> {
 	let res: Response;
 	try {
-		res = await fetch(apiUrl('POST /api/v1/energies'), {
+		res = await fetch(apiUrl(route), {
 			method: 'POST',
 			headers: { 'content-type': 'application/json' },
 			body: JSON.stringify(body),
@@ -29,8 +28,27 @@ export async function postEnergies(
 		if ((e as Error).name === 'AbortError') throw e;
 		throw new ApiError(0, 'Could not reach the server; check the connection and try again');
 	}
-	return readApi('POST /api/v1/energies', res);
+	return readApi(route, res);
 }
+
+/** POST /api/v1/energies. */
+export const postEnergies = (body: { config: string; parameters: EnergyParametersBody; gs: GsChoice }, signal?: AbortSignal) =>
+	post('POST /api/v1/energies', body, signal);
+
+/** POST /api/v1/energies/sweep. */
+export const postSweep = (body: { config: string; parameters: EnergyParametersBody; points?: number }, signal?: AbortSignal) =>
+	post('POST /api/v1/energies/sweep', body, signal);
+
+/** POST /api/v1/fit. */
+export const postFit = (
+	body: {
+		config: string;
+		parameters: EnergyParametersBody;
+		vary: string[];
+		observed: { J: string; energy: number; uncertainty?: number; assign?: string | number }[];
+	},
+	signal?: AbortSignal
+) => post('POST /api/v1/fit', body, signal);
 
 /** Turns { "F2(3d,3d)": 60000, "zeta(3d)": 80 } into the API's lists; F and G values are multiplied by `scale`. */
 export function parametersBody(values: Record<string, number>, Eav: number, scale = 1): EnergyParametersBody {

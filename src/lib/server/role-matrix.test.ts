@@ -1,0 +1,455 @@
+/**
+ * The role matrix: every page, form action and /api/v1 route found in src/routes, called as
+ * every kind of actor, with the outcome the product's rules (DEVELOPERS.md, access.ts) expect:
+ * anonymous callers are sent to sign-in (pages) or get 401 (API); non-members — the site admin
+ * included — get 404 for a project; a role below the one needed gets 403; API tokens act with
+ * their owner's role on the API and count for nothing on pages and form actions.
+ *
+ * Routes are DISCOVERED (import.meta.glob over src/routes), so a new route cannot be missed: it
+ * fails here until its expected access is written down — pages and form actions in `PAGE_ACCESS`
+ * below, API routes in the `access` column of src/lib/api/routes.ts (the API's one route table).
+ * Each call runs the real load/action/handler against a fresh project on the test's in-memory
+ * database. The expected outcomes are the product's own rules (common practice, no source).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { isActionFailure, isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { eq } from 'drizzle-orm';
+import { API_ROUTES, type RouteAccess } from '$lib/api/routes';
+import type { Actor } from './access';
+import { db } from './db';
+import { apiTokens, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
+import { newId } from './ids';
+import { signUp } from './services/users';
+import { createToken } from './services/tokens';
+
+// ------------------------------------------------------------------ the one table (pages and actions)
+
+/** Who may use a page or form action. 'public': anyone, signed in or not (the page may still differ). */
+type PageAccess = 'public' | 'signed-in' | 'viewer' | 'editor' | 'owner' | 'admin';
+
+/**
+ * Expected access of every page (key "PAGE /path") and form action (key "ACTION /path ?/name",
+ * "default" for a form without a name). Paths are route ids without (groups), [param] as :param.
+ * A page's access is the strictest of its own load and its layouts' loads.
+ */
+const PAGE_ACCESS: Record<string, PageAccess> = {
+	'PAGE /': 'public',
+	'PAGE /builder': 'public',
+	'PAGE /basis': 'public',
+	'PAGE /transitions': 'public',
+	'PAGE /signin': 'public',
+	'ACTION /signin ?/default': 'public',
+	'PAGE /signup': 'public',
+	'ACTION /signup ?/default': 'public',
+	'PAGE /forgot': 'public',
+	'ACTION /forgot ?/default': 'public',
+	'PAGE /reset/:token': 'public',
+	'ACTION /reset/:token ?/default': 'public',
+	'PAGE /signout': 'public',
+	'ACTION /signout ?/default': 'public',
+	'PAGE /account': 'signed-in',
+	'ACTION /account ?/create': 'signed-in',
+	'ACTION /account ?/revoke': 'signed-in',
+	'ACTION /account ?/password': 'signed-in',
+	'ACTION /account ?/everywhere': 'signed-in',
+	'PAGE /admin/users': 'admin',
+	'ACTION /admin/users ?/role': 'admin',
+	'PAGE /admin/outbox': 'admin',
+	'PAGE /projects': 'signed-in',
+	'ACTION /projects ?/create': 'signed-in',
+	'PAGE /projects/:projectId': 'viewer',
+	'ACTION /projects/:projectId ?/rename': 'owner',
+	'ACTION /projects/:projectId ?/delete': 'owner',
+	'PAGE /projects/:projectId/members': 'viewer',
+	'ACTION /projects/:projectId/members ?/add': 'owner',
+	'ACTION /projects/:projectId/members ?/role': 'owner',
+	'ACTION /projects/:projectId/members ?/remove': 'owner',
+	'ACTION /projects/:projectId/members ?/leave': 'viewer',
+	'PAGE /projects/:projectId/shelf/new': 'editor',
+	'ACTION /projects/:projectId/shelf/new ?/default': 'editor',
+	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
+	'ACTION /projects/:projectId/shelf/:entryId ?/update': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
+};
+
+// ------------------------------------------------------------------ actors
+
+const PASSWORD = 'matrix-password-1';
+const ACTORS = [
+	'anonymous',
+	'non-member',
+	'viewer',
+	'editor',
+	'owner',
+	'site admin',
+	'token:viewer',
+	'token:editor',
+	'token:owner'
+] as const;
+type ActorName = (typeof ACTORS)[number];
+type Outcome = 'allowed' | 'sign-in' | '403' | '404';
+
+const RANK = { viewer: 1, editor: 2, owner: 3 } as const;
+
+/** The rule: what `actor` gets from a route that needs `access`, on a page (`api` false) or the API. */
+function expectedOutcome(access: PageAccess | RouteAccess, actor: ActorName, api: boolean): Outcome {
+	if (access === 'public') return 'allowed';
+	const token = actor.startsWith('token:');
+	// Tokens are for the API only; on pages and form actions they are nobody.
+	if (actor === 'anonymous' || (token && !api)) return 'sign-in';
+	if (access === 'signed-in') return 'allowed';
+	if (access === 'admin') return actor === 'site admin' ? 'allowed' : '403';
+	const role = (token ? actor.slice('token:'.length) : actor) as keyof typeof RANK | 'non-member' | 'site admin';
+	if (role === 'non-member' || role === 'site admin') return '404';
+	return RANK[role] >= RANK[access] ? 'allowed' : '403';
+}
+
+let people: Record<'admin' | 'owner' | 'coOwner' | 'editor' | 'viewer' | 'stranger' | 'signinUser', Actor>;
+const tokens: Record<string, string> = {};
+let originalHashes: Map<string, string>;
+
+async function makeTokens() {
+	for (const role of ['viewer', 'editor', 'owner'] as const) {
+		db.delete(apiTokens).where(eq(apiTokens.userId, people[role].id)).run();
+		tokens[role] = createToken(people[role], `matrix ${role}`).secret;
+	}
+}
+
+beforeAll(async () => {
+	// The first account on a site is its admin (users.ts); it is a member of no project here.
+	const admin = await signUp({ name: 'Site Admin', email: 'admin@matrix.example', password: PASSWORD });
+	const make = (who: string) => signUp({ name: who, email: `${who}@matrix.example`, password: PASSWORD });
+	people = {
+		admin,
+		owner: await make('owner'),
+		coOwner: await make('coowner'),
+		editor: await make('editor'),
+		viewer: await make('viewer'),
+		stranger: await make('stranger'),
+		signinUser: await make('signin')
+	};
+	await makeTokens();
+	originalHashes = new Map(
+		db
+			.select({ id: users.id, h: users.passwordHash })
+			.from(users)
+			.all()
+			.map((r) => [r.id, r.h])
+	);
+});
+
+/** A fresh project per call: owner + co-owner, editor, viewer; one Shelf entry (2p2) with one note. */
+function freshProject() {
+	const projectId = newId();
+	const entryId = newId();
+	db.transaction((tx) => {
+		tx.insert(projects).values({ id: projectId, name: 'Matrix nebula', createdBy: people.owner.id }).run();
+		for (const [who, role] of [
+			['owner', 'owner'],
+			['coOwner', 'owner'],
+			['editor', 'editor'],
+			['viewer', 'viewer']
+		] as const)
+			tx.insert(memberships).values({ projectId, userId: people[who].id, role }).run();
+		tx.insert(shelfEntries).values({ id: entryId, projectId, title: 'Carbon-like ground', notation: '1s2 2s2 2p2' }).run();
+		tx.insert(levelAnnotations).values({ id: newId(), entryId, levelKey: '3P#1|2', observedEnergy: 43.4, status: 'proposed' }).run();
+	});
+	return { projectId, entryId };
+}
+
+/** Undoes what an allowed call may have changed on the actors themselves (passwords, tokens, site roles). */
+async function restoreActors() {
+	for (const [id, h] of originalHashes) db.update(users).set({ passwordHash: h }).where(eq(users.id, id)).run();
+	db.update(users).set({ siteRole: 'member' }).where(eq(users.id, people.stranger.id)).run();
+	const live = db.select({ userId: apiTokens.userId }).from(apiTokens).all().length;
+	if (live < 3) await makeTokens();
+}
+
+// ------------------------------------------------------------------ sample inputs (so that allowed calls succeed)
+
+type Ctx = { projectId: string; entryId: string; actor: Actor | null; n: number };
+type Sample = { query?: string; body?: Record<string, unknown>; form?: (ctx: Ctx) => Record<string, string>; json?: (ctx: Ctx) => unknown };
+
+const SAMPLES: Record<string, Sample> = {
+	'GET /api/v1/terms': { query: '?config=2p2' },
+	'GET /api/v1/jj': { query: '?config=2p2' },
+	'GET /api/v1/bridge': { query: '?config=2p2' },
+	'GET /api/v1/basis': { query: '?j1=1&j2=1/2' },
+	'GET /api/v1/wigner': { query: '?symbol=3j&args=1,1,0,0,0,0' },
+	'GET /api/v1/species': { query: '?name=Fe%20II' },
+	'GET /api/v1/microstates': { query: '?config=2p2&offset=0&limit=5' },
+	'POST /api/v1/projects': { json: () => ({ name: 'Made by the matrix' }) },
+	'PATCH /api/v1/projects/:projectId': { json: () => ({ name: 'Renamed by the matrix' }) },
+	'POST /api/v1/projects/:projectId/members': { json: () => ({ email: 'stranger@matrix.example', role: 'viewer' }) },
+	'POST /api/v1/projects/:projectId/shelf': { json: () => ({ title: 'Neon excited', notation: '2p5 3p' }) },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { json: () => ({ title: 'Renamed', version: 1 }) },
+	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { json: () => ({ levelKey: '3P#1|1', observedEnergy: 16.4 }) },
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': { query: '?level=3P%231%7C2' },
+	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { query: '?format=csv' },
+	'ACTION /signin ?/default': { form: () => ({ email: 'signin@matrix.example', password: PASSWORD }) },
+	'ACTION /signup ?/default': { form: (c) => ({ name: 'New Person', email: `new${c.n}@matrix.example`, password: PASSWORD }) },
+	'ACTION /forgot ?/default': { form: () => ({ email: 'viewer@matrix.example' }) },
+	'ACTION /account ?/create': { form: () => ({ name: 'matrix script' }) },
+	'ACTION /account ?/revoke': {
+		form: (c) => {
+			const mine = c.actor ? db.select().from(apiTokens).where(eq(apiTokens.userId, c.actor.id)).get() : undefined;
+			return { id: mine?.id ?? (c.actor ? createToken(c.actor, 'to revoke').id : 'none') };
+		}
+	},
+	'ACTION /account ?/password': { form: () => ({ current: PASSWORD, password: 'matrix-password-2' }) },
+	'ACTION /admin/users ?/role': { form: () => ({ userId: people.stranger.id, siteRole: 'member' }) },
+	'ACTION /projects ?/create': { form: () => ({ name: 'Made by the matrix' }) },
+	'ACTION /projects/:projectId ?/rename': { form: () => ({ name: 'Renamed', description: '' }) },
+	'ACTION /projects/:projectId ?/delete': { form: () => ({ confirm: 'Matrix nebula' }) },
+	'ACTION /projects/:projectId/members ?/add': { form: () => ({ email: 'stranger@matrix.example', role: 'viewer' }) },
+	'ACTION /projects/:projectId/members ?/role': { form: () => ({ userId: people.viewer.id, role: 'editor' }) },
+	'ACTION /projects/:projectId/members ?/remove': { form: () => ({ userId: people.viewer.id }) },
+	'ACTION /projects/:projectId/shelf/new ?/default': { form: () => ({ title: 'Neon excited', notation: '2p5 3p' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/update': {
+		form: () => ({ title: 'Renamed', notation: '1s2 2s2 2p2', species: '', notes: '', tags: '', version: '1' })
+	},
+	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': {
+		form: () => ({ levelKey: '3P#1|1', observedEnergy: '16.4', status: 'proposed' })
+	}
+};
+
+/** Calls that cannot succeed for anyone with a made-up input, so "allowed" means "not refused". */
+const NOT_STRICT = new Set(['ACTION /reset/:token ?/default']);
+
+// ------------------------------------------------------------------ discovery
+
+type Module = Record<string, unknown>;
+const serverFiles = import.meta.glob<Module>('/src/routes/**/+server.ts');
+const pageServerFiles = import.meta.glob<Module>('/src/routes/**/+page.server.ts');
+const layoutServerFiles = import.meta.glob<Module>('/src/routes/**/+layout.server.ts');
+const pageFiles = import.meta.glob('/src/routes/**/+page.svelte');
+
+/** "/src/routes/(app)/projects/[projectId]/+page.server.ts" → "/projects/:projectId". */
+function routePath(file: string): string {
+	const dirs = file
+		.replace(/^\/src\/routes/, '')
+		.split('/')
+		.slice(0, -1);
+	const parts = dirs.filter((d) => d && !/^\(.+\)$/.test(d)).map((d) => d.replace(/^\[(.+)\]$/, ':$1'));
+	return '/' + parts.join('/');
+}
+
+const dirOf = (file: string) => file.slice(0, file.lastIndexOf('/'));
+
+/** The layout server files that run before a page in `dir`, outermost first. */
+function layoutsAbove(dir: string): string[] {
+	return Object.keys(layoutServerFiles)
+		.filter((f) => dir === dirOf(f) || dir.startsWith(dirOf(f) + '/'))
+		.sort((a, b) => a.length - b.length);
+}
+
+interface Cell {
+	key: string;
+	api: boolean;
+	access: PageAccess | RouteAccess | undefined;
+	run: (event: RequestEvent) => Promise<unknown>;
+	method: string;
+	path: string;
+}
+
+const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
+
+async function discover(): Promise<Cell[]> {
+	const cells: Cell[] = [];
+	const apiAccess = new Map(API_ROUTES.map((r) => [`${r.method} ${r.path}`, r.access]));
+	for (const [file, load] of Object.entries(serverFiles)) {
+		const mod = await load();
+		const path = routePath(file);
+		for (const method of METHODS) {
+			const handler = mod[method] as ((e: RequestEvent) => Promise<Response>) | undefined;
+			if (!handler) continue;
+			const key = `${method} ${path}`;
+			cells.push({ key, api: true, access: apiAccess.get(key), run: (e) => handler(e), method, path });
+		}
+	}
+	const pageDirs = new Set([...Object.keys(pageFiles), ...Object.keys(pageServerFiles)].map(dirOf));
+	for (const dir of pageDirs) {
+		const serverFile = `${dir}/+page.server.ts`;
+		const mod = serverFile in pageServerFiles ? await pageServerFiles[serverFile]() : {};
+		const path = routePath(serverFile);
+		const layouts = await Promise.all(layoutsAbove(dir).map((f) => layoutServerFiles[f]()));
+		const pageLoad = mod.load as ((e: RequestEvent) => unknown) | undefined;
+		cells.push({
+			key: `PAGE ${path}`,
+			api: false,
+			access: PAGE_ACCESS[`PAGE ${path}`],
+			method: 'GET',
+			path,
+			run: async (e) => {
+				// SvelteKit refuses the page when any layout load or the page load refuses.
+				for (const layout of layouts) await (layout.load as ((e: RequestEvent) => unknown) | undefined)?.(e);
+				return pageLoad?.(e);
+			}
+		});
+		const actions = (mod.actions ?? {}) as Record<string, (e: RequestEvent) => unknown>;
+		for (const [name, action] of Object.entries(actions)) {
+			const key = `ACTION ${path} ?/${name}`;
+			cells.push({ key, api: false, access: PAGE_ACCESS[key], method: 'POST', path, run: async (e) => action(e) });
+		}
+	}
+	return cells.sort((a, b) => a.key.localeCompare(b.key));
+}
+
+// ------------------------------------------------------------------ calling a route as an actor
+
+function actorOf(name: ActorName): { user: Actor | null; token: string | null } {
+	switch (name) {
+		case 'anonymous':
+			return { user: null, token: null };
+		case 'non-member':
+			return { user: people.stranger, token: null };
+		case 'site admin':
+			return { user: people.admin, token: null };
+		case 'viewer':
+		case 'editor':
+		case 'owner':
+			return { user: people[name], token: null };
+		default:
+			return { user: null, token: tokens[name.slice('token:'.length)] };
+	}
+}
+
+const cookieJar = () => {
+	const jar = new Map<string, string>();
+	return {
+		get: (n: string) => jar.get(n),
+		getAll: () => [...jar].map(([name, value]) => ({ name, value })),
+		set: (n: string, v: string) => void jar.set(n, v),
+		delete: (n: string) => void jar.delete(n),
+		serialize: () => ''
+	};
+};
+
+function eventFor(cell: Cell, actorName: ActorName, ctx: Ctx): RequestEvent {
+	const sample = SAMPLES[cell.key] ?? {};
+	const params: Record<string, string> = { projectId: ctx.projectId, entryId: ctx.entryId, token: 'not-a-live-reset-token' };
+	const pathname = cell.path.replace(/:(\w+)/g, (_, p: string) => encodeURIComponent(params[p]));
+	const url = new URL(`http://localhost${pathname}${sample.query ?? ''}`);
+	const { user, token } = actorOf(actorName);
+	const headers = new Headers({ origin: 'http://localhost' });
+	if (token) headers.set('authorization', `Bearer ${token}`);
+	let body: string | undefined;
+	if (cell.method !== 'GET' && cell.method !== 'DELETE') {
+		if (cell.api) {
+			headers.set('content-type', 'application/json');
+			body = JSON.stringify(sample.json?.(ctx) ?? {});
+		} else {
+			headers.set('content-type', 'application/x-www-form-urlencoded');
+			body = new URLSearchParams(sample.form?.(ctx) ?? {}).toString();
+		}
+	}
+	return {
+		url,
+		params,
+		request: new Request(url, { method: cell.method, headers, body }),
+		locals: {
+			user,
+			session: user ? { id: `matrix-${ctx.n}`, userId: user.id, fresh: false, expiresAt: new Date(Date.now() + 3600_000) } : null
+		},
+		cookies: cookieJar(),
+		getClientAddress: () => `10.77.${Math.floor(ctx.n / 250) % 250}.${ctx.n % 250}`,
+		route: { id: cell.path },
+		setHeaders: () => {},
+		isDataRequest: false,
+		isSubRequest: false,
+		platform: undefined,
+		depends: () => {},
+		parent: async () => ({}),
+		untrack: <T>(fn: () => T) => fn(),
+		fetch
+	} as unknown as RequestEvent;
+}
+
+type Answer = { status: number; location?: string };
+
+async function call(cell: Cell, event: RequestEvent): Promise<Answer> {
+	try {
+		const out = await cell.run(event);
+		if (out instanceof Response) return { status: out.status, location: out.headers.get('location') ?? undefined };
+		if (isActionFailure(out)) return { status: out.status };
+		return { status: 200 };
+	} catch (e) {
+		if (isRedirect(e)) return { status: e.status, location: e.location };
+		if (isHttpError(e)) return { status: e.status };
+		throw e;
+	}
+}
+
+function classify(a: Answer): Outcome | 'other' {
+	// requireUser sends the anonymous to "/signin?next=…" (signing out lands on a bare "/signin").
+	if (a.status === 401 || (a.location && a.location.startsWith('/signin?next='))) return 'sign-in';
+	if (a.status === 403) return '403';
+	if (a.status === 404) return '404';
+	if (a.status < 400) return 'allowed';
+	return 'other';
+}
+
+// ------------------------------------------------------------------ the test
+
+describe('role matrix', () => {
+	let cells: Cell[] = [];
+	beforeAll(async () => {
+		cells = await discover();
+	});
+
+	it('discovers the routes (pages, form actions, API) from src/routes', () => {
+		expect(cells.filter((c) => c.key.startsWith('PAGE ')).length).toBeGreaterThanOrEqual(15);
+		expect(cells.filter((c) => c.key.startsWith('ACTION ')).length).toBeGreaterThanOrEqual(20);
+		expect(cells.filter((c) => c.api).length).toBeGreaterThanOrEqual(25);
+	});
+
+	it('every discovered route has an expected access written down', () => {
+		const missing = cells
+			.filter((c) => c.access === undefined)
+			.map((c) =>
+				c.api
+					? `${c.key}: add it with its "access" to src/lib/api/routes.ts`
+					: `${c.key}: add its expected access to PAGE_ACCESS in src/lib/server/role-matrix.test.ts`
+			);
+		expect(missing, `Routes without an expected outcome:\n${missing.join('\n')}`).toEqual([]);
+		const listed = new Set(cells.map((c) => c.key));
+		const stale = Object.keys(PAGE_ACCESS).filter((k) => !listed.has(k));
+		expect(stale, `PAGE_ACCESS lists routes that no longer exist: ${stale.join(', ')}`).toEqual([]);
+	});
+
+	it('every actor gets the allowed or refused outcome on every route', async () => {
+		const wrong: string[] = [];
+		let n = 0;
+		const table: Record<string, Record<string, string>> = {};
+		for (const cell of cells) {
+			if (cell.access === undefined) continue;
+			for (const actor of ACTORS) {
+				const ctx = { ...freshProject(), actor: actorOf(actor).user, n: n++ };
+				const answer = await call(cell, eventFor(cell, actor, ctx));
+				await restoreActors();
+				const want = expectedOutcome(cell.access, actor, cell.api);
+				const got = classify(answer);
+				const strict = want === 'allowed' && cell.access !== 'public' && !NOT_STRICT.has(cell.key);
+				// Public routes: nobody is refused; the answer may still be 400 for an input the route does not like.
+				const ok = want === 'allowed' ? got === 'allowed' || (!strict && got === 'other') : got === want;
+				(table[cell.key] ??= {})[actor] = `${answer.status}`;
+				if (!ok)
+					wrong.push(`${cell.key} as ${actor}: expected ${want}, got ${answer.status}${answer.location ? ` → ${answer.location}` : ''}`);
+			}
+		}
+		const size = `${cells.length} routes × ${ACTORS.length} actors = ${n} calls`;
+		console.log(`role matrix: ${size}`);
+		const counts = { public: 0, guarded: 0 };
+		for (const c of cells) counts[c.access === 'public' ? 'public' : 'guarded']++;
+		console.log(`role matrix: ${counts.public} public routes (compute API, sign-in pages), ${counts.guarded} guarded`);
+		expect(wrong, `${wrong.length} of ${n} calls had the wrong outcome:\n${wrong.join('\n')}`).toEqual([]);
+		expect(n).toBeGreaterThan(400);
+	});
+
+	it('the compute routes of the API are public: the matrix says so', () => {
+		for (const key of ['GET /api/v1/terms', 'GET /api/v1/jj', 'GET /api/v1/wigner']) {
+			expect(cells.find((c) => c.key === key)?.access).toBe('public');
+		}
+	});
+});
