@@ -108,6 +108,33 @@ test.describe('Builder pictures', () => {
 		await shot(page, 'level-diagram-2p2');
 	});
 
+	test('Ne I 2p5 3p: three columns, the jK levels in a table, the jj side grouped by the core j; ζ can be changed', async ({ page }) => {
+		// Ne I 2p⁵3p: ten levels, six on the core ²P°₃/₂ and four on ²P°₁/₂ (Cowan 1981 sec. 4.12, from memory).
+		await page.goto('/builder?config=' + encodeURIComponent('[He] 2s2 2p5 3p'));
+		await page.getByRole('tab', { name: 'Coupling bridge' }).click();
+		const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
+		await expect(panel.getByTestId('bridge-jk-level')).toHaveCount(10);
+		await expect(panel.getByTestId('bridge-count-badge')).toHaveText(/LS 10 = jK 10 = jj 10 levels/);
+		await expect(panel.getByTestId('bridge-svg')).toContainText('jK coupling');
+		const table = panel.getByTestId('jk-table');
+		await expect(table.locator('tbody tr')).toHaveCount(10);
+		await expect(table).toContainText('2p⁵(²P°₃/₂)3p ²[5/2]₃');
+		const jj = await panel.getByTestId('bridge-jj-level').evaluateAll((els) => els.map((e) => e.getAttribute('aria-label') ?? ''));
+		// Lowest six jj levels have the 2p3/2 hole (2p1/2² 2p3/2³), the upper four the 2p1/2 hole.
+		expect(jj.slice(0, 6).every((l) => l.includes('2p1/2^2 2p3/2^3'))).toBe(true);
+		expect(jj.slice(6).every((l) => l.includes('2p1/2 2p3/2^4'))).toBe(true);
+		await shot(page, 'bridge-jk-ne');
+		// Equal ζ for 2p and 3p: the engine reorders the jj side (the groups by core j mix).
+		const zeta3p = panel.getByTestId('zeta-controls').getByRole('spinbutton').nth(1);
+		await zeta3p.fill('1');
+		await zeta3p.press('Enter');
+		await expect
+			.poll(async () =>
+				(await panel.getByTestId('bridge-jj-level').evaluateAll((els) => els.map((e) => e.getAttribute('aria-label') ?? ''))).join('|')
+			)
+			.not.toBe(jj.join('|'));
+	});
+
 	test('Coupling bridge of 2p2 joins 5 LS levels to 5 jj levels; 2p 3p has 10 on each side', async ({ page }) => {
 		await page.goto('/builder?config=2p2');
 		await page.getByRole('tab', { name: 'Coupling bridge' }).click();
@@ -120,7 +147,7 @@ test.describe('Builder pictures', () => {
 		expect(lsLabels).toEqual(['3P0', '3P1', '3P2', '1D2', '1S0']);
 		await expect(panel.getByTestId('bridge-count-badge')).toHaveText(/J counts agree: LS 5 = jj 5 levels/);
 		await expect(panel.getByTestId('bridge-note')).toContainText(
-			"Schematic: left in Hund's heuristic order, right by first-order spin–orbit energy; levels of equal J joined by the non-crossing rule."
+			/Schematic: left in Hund's heuristic order, right by first-order\s+spin–orbit energy with one ζ per subshell; levels of equal J joined by the non-crossing rule\./
 		);
 
 		// Hover on ¹S₀ highlights its link (J = 0, to the upper J = 0 jj level, (3/2)² (0)₀).
@@ -147,7 +174,7 @@ test.describe('Builder pictures', () => {
 		await expect(panel.getByTestId('bridge-ls-level')).toHaveCount(10);
 		await expect(panel.getByTestId('bridge-jj-level')).toHaveCount(10);
 		await expect(panel.getByTestId('bridge-link')).toHaveCount(10);
-		await expect(panel.getByTestId('bridge-count-badge')).toHaveText(/J counts agree: LS 10 = jj 10 levels/);
+		await expect(panel.getByTestId('bridge-count-badge')).toHaveText(/J counts agree: LS 10 = jK 10 = jj 10 levels/);
 		await panel.getByTestId('bridge-jj-level').nth(3).hover();
 		await shot(page, 'coupling-bridge-2p3p');
 	});

@@ -138,3 +138,23 @@ test.describe('Transition finder screen', () => {
 		await expect(page).toHaveURL(/\/transitions/);
 	});
 });
+
+test.describe('Line matcher screen (stateless)', () => {
+	test('matches the invented demo lists: one unexplained line, one strong line not observed, sticks drawn', async ({ page }) => {
+		await page.goto('/matcher');
+		await expect(page.getByTestId('levels-status')).toHaveText('12 levels read');
+		await expect(page.getByTestId('lines-status')).toHaveText('21 lines read');
+		await page.getByRole('button', { name: 'Match' }).click();
+		// The demo line list was made from the levels with one extra line (5012.345 Å air) and the strongest
+		// ³P₂–³D°₃ line left out (src/lib/lines/demo.ts).
+		await expect(page.getByTestId('matcher-summary')).toContainText('20 of 21 lines explained, 1 unexplained');
+		await expect(page.getByTestId('match-table').locator('tr[data-unexplained="true"]')).toHaveCount(1);
+		await expect(page.getByTestId('unobserved-table')).toContainText('2p2 3P2 – 2p3d 3D3');
+		await expect(page.getByTestId('stick-spectrum').locator('line')).not.toHaveCount(0);
+		await page.screenshot({ path: 'tests/screenshots/line-matcher.png', fullPage: true });
+
+		await page.getByLabel(/^Lines/).fill('wavelength,unit\n5000,parsec');
+		await expect(page.getByTestId('lines-status')).toContainText('row 1, unit');
+		await expect(page.getByRole('button', { name: 'Match' })).toBeDisabled();
+	});
+});

@@ -106,6 +106,16 @@ test('the Builder, the Shelf entry page and the picture exports run under the CS
 	await context.close();
 });
 
+test('every public page loads under the CSP without violations', async ({ page }) => {
+	const violations = await watchCsp(page);
+	for (const path of ['/', '/builder?config=2p5%203p', '/basis?j1=1&j2=1/2', '/transitions', '/signin', '/signup', '/forgot']) {
+		const answer = await page.goto(path);
+		expect(answer?.status(), path).toBe(200);
+		await page.waitForLoadState('networkidle');
+	}
+	expect(violations).toEqual([]);
+});
+
 test('API failures outside the handlers answer in the one error shape: 404, 405, 413, 431', async ({ browser }) => {
 	const { context, page } = await newUser(browser, 'Bea Body', 'big-body');
 	const request = page.request;

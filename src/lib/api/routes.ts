@@ -25,7 +25,7 @@ const LISTED: Listed = {
 	'GET /api/v1/terms': { summary: 'Term sheet: ?config=3d5 4s[&gs=free]', access: 'public' },
 	'GET /api/v1/jj': { summary: 'jj-coupled levels: ?config=2p5 3p[&counts=only]', access: 'public' },
 	'GET /api/v1/jk': { summary: 'jK (pair) coupled levels, core + one outer electron: ?config=2p5 3p', access: 'public' },
-	'GET /api/v1/bridge': { summary: 'LS ↔ jj correlation by J: ?config=2p 3p', access: 'public' },
+	'GET /api/v1/bridge': { summary: 'LS ↔ jK ↔ jj correlation by J: ?config=2p5 3p[&zeta=2p:1,3p:0.022]', access: 'public' },
 	'GET /api/v1/basis': { summary: 'coupled ⇄ uncoupled table: ?j1=2&j2=1/2', access: 'public' },
 	'GET /api/v1/wigner': { summary: 'Wigner 3j/6j/9j or Clebsch–Gordan: ?symbol=6j&args=1,1,1,1,1,1', access: 'public' },
 	'GET /api/v1/species': { summary: 'ground configuration of an atom or ion: ?name=Fe II', access: 'public' },

@@ -68,6 +68,14 @@ export interface BridgeResponse {
 	ls: { label: string; J: string }[];
 	jj: { label: string; J: string; group: string; subshells: string; spinOrbitWeight: number }[];
 	links: { J: string; ls: number; jj: number }[];
+	/** jK levels in schematic order (core level, then K), or null where jK does not apply (`jkReason` says why). */
+	jk: { label: string; J: string; coreJ: string; K: string }[] | null;
+	jkReason: string | null;
+	/** Indices into `ls`, `jk`, `jj` joined by one J (non-crossing rule); [] without jK. */
+	jkLinks: { J: string; ls: number; jk: number; jj: number }[];
+	/** ζ used for each open subshell (only ratios matter for the jj order). */
+	zeta: { subshell: string; zeta: number }[];
+	zetaSource: string;
 }
 
 /** An exact coefficient sign·√(p/q) with its float value and a plain-text form ("-sqrt(1/3)"). */

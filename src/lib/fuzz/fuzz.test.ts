@@ -71,8 +71,8 @@ function expectRefusal(e: unknown) {
 
 const ENGINE: [string, (text: string) => unknown][] = [
 	['parseConfiguration', (t) => parseConfiguration(t)],
-	['termSheet', (t) => termSheet(t)],
-	['termSheet gs=free', (t) => termSheet(t, { gs: 'free' })],
+	['termSheet', (t) => termSheet(parseConfiguration(t))],
+	['termSheet gs=free', (t) => termSheet(parseConfiguration(t), { gs: 'free' })],
 	['termsOf', (t) => termsOf(parseConfiguration(t))],
 	['levelCountsByJ', (t) => levelCountsByJ(parseConfiguration(t))],
 	['microstateGrid', (t) => microstateGrid(parseConfiguration(t))],

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { couplingBridge } from './bridge';
+import { couplingBridge, parseZetaList } from './bridge';
 import { parseConfiguration } from './parse';
 
 const pair = (b: ReturnType<typeof couplingBridge>, lsLabel: string) => {
@@ -35,5 +35,55 @@ describe('Coupling bridge (non-crossing rule)', () => {
 		const b = couplingBridge(parseConfiguration('2p5'));
 		expect(b.ls[0].label).toBe('2P3/2');
 		expect(b.jj[0].twoJ).toBe(3);
+	});
+});
+
+describe('Coupling bridge with jK and one ζ per subshell', () => {
+	it('2p⁵ 3p: the jj side groups by the core j, six levels on the 2p3/2 hole below four on the 2p1/2 hole', () => {
+		// Ne I 2p⁵3p: ten levels in two groups by the core ²P°₃/₂ (six) and ²P°₁/₂ (four), because ζ(2p) ≫ ζ(3p)
+		// (Cowan 1981 sec. 4.12, from memory). j = 3/2 hole with 3p1/2 gives J = 1, 2 and with 3p3/2 J = 0…3 (vector model).
+		const b = couplingBridge(parseConfiguration('2p5 3p'));
+		const coreOf = (x: (typeof b.jj)[number]) => (x.level.subshellLabel.includes('2p3/2^3') ? 'core 3/2' : 'core 1/2');
+		expect(b.jj.map(coreOf)).toEqual([...Array(6).fill('core 3/2'), ...Array(4).fill('core 1/2')]);
+		expect(b.zeta).toEqual([
+			{ n: 2, l: 1, zeta: 1 },
+			{ n: 3, l: 1, zeta: 1 / 45 }
+		]);
+	});
+
+	it('2p⁵ 3p has a jK column of 10 levels, joined to both sides with equal J', () => {
+		const b = couplingBridge(parseConfiguration('2p5 3p'));
+		expect(b.jk).toHaveLength(10);
+		expect(b.jkLinks).toHaveLength(10);
+		for (const l of b.jkLinks) {
+			expect(b.jk![l.jk].twoJ).toBe(l.twoJ);
+			expect(b.ls[l.ls].twoJ).toBe(l.twoJ);
+			expect(b.jj[l.jj].twoJ).toBe(l.twoJ);
+		}
+		// The jK column in core order: the first six on ²P°₃/₂ (K = 1/2, 3/2, 5/2), as the jj side.
+		expect(b.jk!.slice(0, 6).every((x) => x.core.twoJ === 3)).toBe(true);
+	});
+
+	it('a ζ chosen by the user changes the jj order; jK does not apply to 2p² and says why', () => {
+		const equal = couplingBridge(parseConfiguration('2p5 3p'), [{ n: 3, l: 1, zeta: 1 }]);
+		expect(equal.jj.map((x) => x.spinOrbitWeight)).not.toEqual(
+			couplingBridge(parseConfiguration('2p5 3p')).jj.map((x) => x.spinOrbitWeight)
+		);
+		const b = couplingBridge(parseConfiguration('2p2'));
+		expect(b.jk).toBeNull();
+		expect(b.jkReason).toMatch(/jK coupling needs/);
+		expect(() => couplingBridge(parseConfiguration('2p5 3p'), [{ n: 4, l: 0, zeta: 1 }])).toThrow(/not open here/);
+		expect(() => couplingBridge(parseConfiguration('2p5 3p'), [{ n: 3, l: 1, zeta: -1 }])).toThrow(/positive/);
+	});
+});
+
+describe('ζ as written in the API', () => {
+	it('reads 2p:1,3p:0.022 and refuses what it cannot read', () => {
+		expect(parseZetaList('2p:1, 3p:0.022')).toEqual([
+			{ n: 2, l: 1, zeta: 1 },
+			{ n: 3, l: 1, zeta: 0.022 }
+		]);
+		expect(parseZetaList('')).toEqual([]);
+		expect(() => parseZetaList('2p=1')).toThrow(/write subshell:value pairs/);
 	});
 });

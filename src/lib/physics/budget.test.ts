@@ -20,7 +20,7 @@ const cfg = (text: string) => parseConfiguration(text);
 describe('engine budgets, checked before the work', () => {
 	it('12o23 and 10m19 fit the counting budget; 12o23 is over the Term sheet budget', () => {
 		expect(() => termsOf(cfg('12o23'))).not.toThrow(); // terms with seniority counts: small
-		expect(() => termSheet('12o23')).toThrow(/Term sheet .* over the limit of 15000/);
+		expect(() => termSheet(parseConfiguration('12o23'))).toThrow(/Term sheet .* over the limit of 15000/);
 	});
 	it('the Term sheet row bound is an upper bound of the real J-level rows (3d3: 19 levels in 8 terms → 17 rows)', () => {
 		// d³: 2P 2D(2) 2F 2G 2H 4P 4F (Condon & Shortley 1935, ch. VII); rows = distinct terms × their J values.

@@ -10,6 +10,7 @@
  *
  * All angular momenta are doubled (twoJ, twoJsub, …).
  */
+import { levelsFromProjections, subsetSumRows, toSafeNumber, type SubsetSumRows } from './counting';
 import type { Configuration, Subshell } from './types';
 import { halfString } from './half';
 import { lLetter } from './letters';
@@ -73,50 +74,29 @@ interface GroupJ {
 	count: number;
 }
 
-const mCountCache = new Map<string, Map<number, number>>();
+const rowsCache = new Map<number, SubsetSumRows>();
 
 /**
  * Number of ways to put k electrons into the 2j+1 states m = −j … j with Σm = M, as a map
  * 2M → count: the coefficient of x^M in the generating function Π_m (1 + y x^m), read at y^k
- * (Condon & Shortley 1935, ch. 7 counting; computed by dynamic programming, not by listing).
+ * (Condon & Shortley 1935, ch. 7 counting; the shared subset-sum counting of ./counting.ts).
  */
 function mCountsOfGroup(twoJsub: number, k: number): Map<number, number> {
-	const key = `${twoJsub},${k}`;
-	const cached = mCountCache.get(key);
-	if (cached) return cached;
-	const states = twoJsub + 1;
-	const span = k * twoJsub; // |2M| ≤ k·2j
-	const width = 2 * span + 1;
-	// ways[c][s + span]: ways to choose c of the m values seen so far with Σ2m = s.
-	let ways: number[][] = Array.from({ length: k + 1 }, () => new Array<number>(width).fill(0));
-	ways[0][span] = 1;
-	for (let i = 0; i < states; i++) {
-		const tm = -twoJsub + 2 * i;
-		const next = ways.map((row) => row.slice());
-		for (let c = 0; c < k; c++) {
-			for (let s = 0; s < width; s++) {
-				const w = ways[c][s];
-				if (w !== 0 && s + tm >= 0 && s + tm < width) next[c + 1][s + tm] += w;
-			}
-		}
-		ways = next;
+	let table = rowsCache.get(twoJsub);
+	if (!table) {
+		table = subsetSumRows(Array.from({ length: twoJsub + 1 }, (_, i) => -twoJsub + 2 * i));
+		rowsCache.set(twoJsub, table);
 	}
 	const out = new Map<number, number>();
-	for (let s = 0; s < width; s++) if (ways[k][s] !== 0) out.set(s - span, ways[k][s]);
-	mCountCache.set(key, out);
+	table.rows[k].forEach((n, i) => {
+		if (n !== 0) out.set(i - table.offsets[k], n);
+	});
 	return out;
 }
 
 /** J multiplicities of j^k from N(J) = n(M = J) − n(M = J + 1) (Condon & Shortley 1935, ch. 7). */
 function jCountsOfGroup(twoJsub: number, k: number): Map<number, number> {
-	const m = mCountsOfGroup(twoJsub, k);
-	const out = new Map<number, number>();
-	for (const [twoM, n] of m) {
-		if (twoM < 0) continue;
-		const diff = n - (m.get(twoM + 2) ?? 0);
-		if (diff > 0) out.set(twoM, diff);
-	}
-	return out;
+	return levelsFromProjections(mCountsOfGroup(twoJsub, k));
 }
 
 /**
@@ -228,15 +208,6 @@ function subshellTable(l: number, N: number): JTable {
 	return total;
 }
 
-function toSafe(n: bigint, twoJ: number): number {
-	if (n > BigInt(Number.MAX_SAFE_INTEGER)) {
-		throw new RangeError(
-			`the number of jj levels with J = ${halfString(twoJ)} is ${n}, too large to report exactly (above 2^53); use a smaller configuration`
-		);
-	}
-	return Number(n);
-}
-
 /**
  * Number of jj-coupled levels of each J, as a map 2J → count in ascending 2J (zero counts left out).
  * Works without listing levels: each j^k group's J multiplicities by M-counting, coupled by the
@@ -261,7 +232,8 @@ export function jjLevelCountsByJ(input: Configuration | readonly Subshell[]): Ma
 		total = coupleTables(total, subshellTable(s.l, s.occupancy));
 	}
 	const out = new Map<number, number>();
-	for (const [j, n] of [...total].sort((a, b) => a[0] - b[0])) if (n > 0n) out.set(j, toSafe(n, j));
+	for (const [j, n] of [...total].sort((a, b) => a[0] - b[0]))
+		if (n > 0n) out.set(j, toSafeNumber(n, `the number of jj levels with J = ${halfString(j)}`));
 	return out;
 }
 

@@ -15,6 +15,7 @@
  */
 import type { Configuration, Subshell } from './types';
 import { asSubshells, openSubshells, subshellCapacity } from './parse';
+import { subsetSumRows, type SubsetSumRows } from './counting';
 import { checkGridBudget } from './budget';
 
 /**
@@ -75,6 +76,7 @@ export function binomial(n: number, k: number): bigint {
 export function clearMicrostateCache(): void {
 	subshellCache.clear();
 	rowsCache.clear();
+	combinedCache.clear();
 }
 
 /**
@@ -87,41 +89,17 @@ export function maxMLOf(l: number, N: number): number {
 	return sum;
 }
 
-const rowsCache = new Map<number, { rows: number[][]; offsets: number[] }>();
+const rowsCache = new Map<number, SubsetSumRows>();
 
 /**
  * Number of k-subsets of {−l … l} with each sum M (Gaussian binomial coefficients), for
  * k = 0 … 2l+1: rows[k][M + offsets[k]]. Every entry is at most C(2l+1, k), exact in floats.
  */
-function gaussianRows(l: number): { rows: number[][]; offsets: number[] } {
+function gaussianRows(l: number): SubsetSumRows {
 	const hit = rowsCache.get(l);
 	if (hit) return hit;
-	const width = 2 * l + 1;
-	// dp[k] is indexed by sum + zero to stay non-negative; sums lie in [−l·width, l·width].
-	const zero = l * width;
-	const span = 2 * zero + 1;
-	const dp: number[][] = [];
-	for (let k = 0; k <= width; k++) dp.push(new Array<number>(span).fill(0));
-	dp[0][zero] = 1;
-	for (let m = -l; m <= l; m++) {
-		// Descending k: dp[k] is read before this orbital updates it (each orbital used once).
-		for (let k = width - 1; k >= 0; k--) {
-			const row = dp[k];
-			const target = dp[k + 1];
-			for (let s = 0; s < span; s++) {
-				const v = row[s];
-				if (v !== 0) target[s + m] += v;
-			}
-		}
-	}
-	const rows: number[][] = [];
-	const offsets: number[] = [];
-	for (let k = 0; k <= width; k++) {
-		const top = maxMLOf(l, 2 * k) / 2; // largest sum of k distinct values: l + (l−1) + …
-		rows.push(dp[k].slice(zero - top, zero + top + 1));
-		offsets.push(top);
-	}
-	const result = { rows, offsets };
+	const mls = Array.from({ length: 2 * l + 1 }, (_, i) => i - l);
+	const result = subsetSumRows(mls);
 	rowsCache.set(l, result);
 	return result;
 }
@@ -243,9 +221,34 @@ function mirror<T>(out: { [i: number]: T }, H: number, W: number, iMin: number, 
 
 const CLOSED: FlatGrid = { maxML: 0, maxTwoMS: 0, big: [1n], small: Float64Array.of(1) };
 
+/**
+ * Recently combined grids by their open (l, N) list: one Term sheet asks for the same grid from
+ * several modules (terms, Hund's order, parentage, the grid itself), and n does not change it.
+ */
+const combinedCache = new Map<string, FlatGrid>();
+const COMBINED_CACHE_SIZE = 16;
+
 function flatGridOf(subshells: readonly Subshell[]): FlatGrid {
 	const open = openSubshells(subshells);
 	if (open.length === 0) return CLOSED;
+	const key = open
+		.map((s) => `${s.l}^${s.occupancy}`)
+		.sort()
+		.join(' ');
+	const hit = combinedCache.get(key);
+	if (hit) {
+		// Most recently used last, so the oldest is evicted first.
+		combinedCache.delete(key);
+		combinedCache.set(key, hit);
+		return hit;
+	}
+	const grid = combineGrids(open);
+	combinedCache.set(key, grid);
+	if (combinedCache.size > COMBINED_CACHE_SIZE) combinedCache.delete(combinedCache.keys().next().value!);
+	return grid;
+}
+
+function combineGrids(open: readonly Subshell[]): FlatGrid {
 	let total = 1n;
 	for (const s of open) total *= binomial(subshellCapacity(s.l), s.occupancy);
 	const exactInFloat = total <= BigInt(Number.MAX_SAFE_INTEGER);

@@ -184,8 +184,12 @@ function assemble(entries: { s: Subshell; token: string; fromCore: string | null
 	subshells.sort(bySubshellOrder);
 	let electrons = 0;
 	for (const s of subshells) electrons += s.occupancy;
+	checkedLists.add(subshells);
 	return { subshells, electrons, parity: parityOf(subshells), core };
 }
+
+/** Subshell lists that the parser or `configurationOf` built and checked: the engine trusts them without checking again. */
+const checkedLists = new WeakSet<readonly Subshell[]>();
 
 /**
  * A checked Configuration from a list of subshells (any order; sorted by n then l) and an
@@ -216,6 +220,8 @@ export function configurationOf(subshells: readonly Subshell[], core: string | n
  * @example asSubshells([{ n: 2, l: 1, occupancy: 2 }]) // [{ n: 2, l: 1, occupancy: 2 }]
  */
 export function asSubshells(input: Configuration | readonly Subshell[]): Subshell[] {
+	// A configuration from the parser was checked once at the edge; it is not checked (or parsed) again.
+	if ('subshells' in input && checkedLists.has(input.subshells)) return input.subshells.slice();
 	if ('subshells' in input) return configurationOf(input.subshells).subshells;
 	return configurationOf(input).subshells;
 }

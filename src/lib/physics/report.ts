@@ -11,7 +11,7 @@
 import type { Configuration } from './types';
 import { halfString } from './half';
 import { termLetter } from './letters';
-import { formatConfiguration, parseConfiguration, subshellLabel } from './parse';
+import { formatConfiguration, subshellLabel } from './parse';
 import { countAt, microstateGrid, microstateTotal, type MicrostateGrid } from './microstates';
 import { levelsOf, statisticalWeight, termLabel, termsOf } from './terms';
 import { fractionString, GS_FREE_ELECTRON, landeG } from './lande';
@@ -114,10 +114,9 @@ export interface TermSheetOptions {
  * Throws ConfigurationError (with `.token`) for bad notation, BudgetError (a RangeError) before
  * any work when the configuration is over a budget of ./budget.ts (counting work, grid cells,
  * J-level rows), RangeError when a term count is too large to report.
- * @example termSheet('3d5 4s').hund.level // '7S3'
+ * @example termSheet(parseConfiguration('3d5 4s')).hund.level // '7S3'
  */
-export function termSheet(input: string | Configuration, options: TermSheetOptions = {}): TermSheet {
-	const cfg = typeof input === 'string' ? parseConfiguration(input) : input;
+export function termSheet(cfg: Configuration, options: TermSheetOptions = {}): TermSheet {
 	checkTermSheetBudget(cfg.subshells, microstateTotal(cfg) <= BigInt(Number.MAX_SAFE_INTEGER));
 	const free = options.gs === 'free';
 	const terms = termsOf(cfg);

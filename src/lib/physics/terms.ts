@@ -7,6 +7,7 @@
  * (vector model; Condon & Shortley 1935; Cowan 1981). Seniorities (Racah 1943) are attached
  * when at most one subshell is open.
  */
+import { levelsFromProjections, toSafeNumber } from './counting';
 import type { Configuration, Subshell, Term } from './types';
 import { halfString } from './half';
 import { termLetter } from './letters';
@@ -21,13 +22,6 @@ export type TermLike = Pick<Term, 'twoS' | 'L'>;
 export interface Level {
 	twoJ: number;
 	weight: number;
-}
-
-function toSafeNumber(v: bigint, what: string): number {
-	if (v > BigInt(Number.MAX_SAFE_INTEGER)) {
-		throw new RangeError(`${what} is ${v}, too large to report exactly (above 2^53); use a smaller configuration`);
-	}
-	return Number(v);
 }
 
 /**
@@ -89,13 +83,9 @@ export function statisticalWeight(term: TermLike): number {
  * @example levelCountsByJ(parseConfiguration('2p2')) // Map { 0 => 2, 2 => 1, 4 => 2 }
  */
 export function levelCountsByJ(input: Configuration | readonly Subshell[]): Map<number, number> {
-	const mj = mjCounts(microstateGrid(input));
 	const out = new Map<number, number>();
-	for (const [twoMJ, n] of mj) {
-		if (twoMJ < 0) continue;
-		const diff = n - (mj.get(twoMJ + 2) ?? 0n);
-		if (diff > 0n) out.set(twoMJ, toSafeNumber(diff, `the number of levels with 2J = ${twoMJ}`));
-	}
+	for (const [twoJ, n] of levelsFromProjections(mjCounts(microstateGrid(input))))
+		out.set(twoJ, toSafeNumber(n, `the number of levels with 2J = ${twoJ}`));
 	return out;
 }
 

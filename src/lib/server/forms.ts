@@ -1,12 +1,51 @@
-/** Reads the Shelf entry fields from a submitted form. */
+/**
+ * Reading submitted forms in one typed way: every form action calls `readForm(request)` and asks for
+ * its fields by name. A missing field or an uploaded file where text was expected reads as '' (the
+ * zod schemas in ./validation then say what is required); nothing is coerced silently.
+ */
 import { splitTags } from './validation';
 
-export function shelfFieldsFrom(form: FormData) {
+export interface FormFields {
+	/** The field as typed, '' when absent (or when it holds a file). */
+	text(name: string): string;
+	/** A checkbox: true when sent as "on" (or any value but "off"/""). */
+	checked(name: string): boolean;
+	/** An uploaded file, or null. */
+	file(name: string): File | null;
+}
+
+/** The submitted fields of a form action's request. */
+export async function readForm(request: Request): Promise<FormFields> {
+	const form = await request.formData();
+	return fieldsOf(form);
+}
+
+/** The same reading for a FormData already in hand. */
+export function fieldsOf(form: FormData): FormFields {
 	return {
-		title: String(form.get('title') ?? ''),
-		species: String(form.get('species') ?? ''),
-		notation: String(form.get('notation') ?? ''),
-		notes: String(form.get('notes') ?? ''),
-		tags: splitTags(String(form.get('tags') ?? ''))
+		text: (name) => {
+			const v = form.get(name);
+			return typeof v === 'string' ? v : '';
+		},
+		checked: (name) => {
+			const v = form.get(name);
+			return typeof v === 'string' && v !== '' && v !== 'off';
+		},
+		file: (name) => {
+			const v = form.get(name);
+			return v instanceof File ? v : null;
+		}
+	};
+}
+
+/** Reads the Shelf entry fields from a submitted form. */
+export function shelfFieldsFrom(form: FormData | FormFields) {
+	const f = form instanceof FormData ? fieldsOf(form) : form;
+	return {
+		title: f.text('title'),
+		species: f.text('species'),
+		notation: f.text('notation'),
+		notes: f.text('notes'),
+		tags: splitTags(f.text('tags'))
 	};
 }

@@ -37,6 +37,7 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /builder': 'public',
 	'PAGE /basis': 'public',
 	'PAGE /transitions': 'public',
+	'PAGE /matcher': 'public',
 	'PAGE /signin': 'public',
 	'ACTION /signin ?/default': 'public',
 	'PAGE /signup': 'public',

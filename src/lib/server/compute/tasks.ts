@@ -16,10 +16,11 @@ import { formatConfiguration, parseConfiguration, openSubshells } from '../../ph
 import { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from '../../physics/jj';
 import { levelCountsByJ } from '../../physics/terms';
 import { halfString } from '../../physics/half';
-import { couplingBridge } from '../../physics/bridge';
+import { couplingBridge, parseZetaList, ZETA_SOURCE } from '../../physics/bridge';
+import { lLetter } from '../../physics/letters';
 import { couplingTable } from '../../physics/basis';
 import { exactJson } from '../../physics/exact';
-import { evaluateSymbol, type SymbolKind } from '../../physics/wigner';
+import { evaluateSymbol, type SymbolKind } from './symbol-args';
 import { gridExtent, gridWork, seniorityWork, sheetLevelRowsBound } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
 import { InputError } from '../../physics/input-error';
@@ -62,7 +63,7 @@ function fewMicrostates(config: string): boolean {
 
 const terms: ComputeTask<{ config: string; gs: 'exact' | 'free' }> = {
 	light: ({ config }) => sheetIsLight(config),
-	run: ({ config, gs }): ApiResponses['GET /api/v1/terms'] => termSheet(config, { gs })
+	run: ({ config, gs }): ApiResponses['GET /api/v1/terms'] => termSheet(parseConfiguration(config), { gs })
 };
 
 const jj: ComputeTask<{ config: string; countsOnly: boolean }> = {
@@ -91,9 +92,9 @@ const jj: ComputeTask<{ config: string; countsOnly: boolean }> = {
 	}
 };
 
-const bridge: ComputeTask<{ config: string }> = {
+const bridge: ComputeTask<{ config: string; zeta?: string }> = {
 	light: ({ config }) => fewMicrostates(config),
-	run: ({ config }): ApiResponses['GET /api/v1/bridge'] => {
+	run: ({ config, zeta }): ApiResponses['GET /api/v1/bridge'] => {
 		const cfg = parseConfiguration(config);
 		// Say what the user can do instead, in words of the app (not the engine's function names).
 		let levels = 0;
@@ -102,7 +103,7 @@ const bridge: ComputeTask<{ config: string }> = {
 			throw new RangeError(
 				`${formatConfiguration(cfg)} has ${levels} levels, more than the ${MAX_JJ_LEVELS} the Coupling bridge can join one by one. The Term sheet still gives its terms and the number of levels of each J, and the jj levels can be counted by J (GET /api/v1/jj?counts=only); or bridge a smaller configuration, e.g. with fewer open subshells.`
 			);
-		const b = couplingBridge(cfg);
+		const b = couplingBridge(cfg, parseZetaList(zeta ?? ''));
 		return {
 			configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },
 			schematic: true,
@@ -114,7 +115,12 @@ const bridge: ComputeTask<{ config: string }> = {
 				subshells: x.level.subshellLabel,
 				spinOrbitWeight: x.spinOrbitWeight
 			})),
-			links: b.links.map((l) => ({ J: halfString(l.twoJ), ls: l.ls, jj: l.jj }))
+			links: b.links.map((l) => ({ J: halfString(l.twoJ), ls: l.ls, jj: l.jj })),
+			jk: b.jk ? b.jk.map((x) => ({ label: x.label, J: halfString(x.twoJ), coreJ: halfString(x.core.twoJ), K: halfString(x.twoK) })) : null,
+			jkReason: b.jkReason,
+			jkLinks: b.jkLinks.map((l) => ({ J: halfString(l.twoJ), ls: l.ls, jk: l.jk, jj: l.jj })),
+			zeta: b.zeta.map((z) => ({ subshell: `${z.n}${lLetter(z.l)}`, zeta: z.zeta })),
+			zetaSource: ZETA_SOURCE
 		};
 	}
 };

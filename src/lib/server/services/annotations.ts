@@ -11,6 +11,7 @@ import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { entryWarnings, readEntry } from './shelf';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput, reattachSchema } from '../validation';
+import { parseConfiguration } from '../../physics/parse';
 import { termSheet, type TermSheet } from '../../physics/report';
 import { BudgetError } from '../../physics/budget';
 import { levelKey, levelRefs, levelText } from '../../levels';
@@ -54,7 +55,7 @@ function withTexts<R extends AnnotationRow>(a: R): R & { observedEnergyText: str
  */
 function entryLevels(entry: { notation: string }): { sheet: TermSheet; refs: ReturnType<typeof levelRefs> } {
 	try {
-		const sheet = termSheet(entry.notation);
+		const sheet = termSheet(parseConfiguration(entry.notation));
 		return { sheet, refs: levelRefs(sheet.terms) };
 	} catch (e) {
 		if (e instanceof BudgetError)

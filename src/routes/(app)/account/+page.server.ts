@@ -4,6 +4,7 @@ import { createToken, listTokens, revokeToken } from '$lib/server/services/token
 import { changePassword, signOutEverywhere } from '$lib/server/services/account';
 import { startSession } from '$lib/server/session';
 import { forAction, requireUser } from '$lib/server/http';
+import { readForm } from '$lib/server/forms';
 
 /** What the page says after a password change, reset or "sign out everywhere" (read from the redirect). */
 function endedNotice(url: URL) {
@@ -21,21 +22,21 @@ export const load: PageServerLoad = (event) => {
 export const actions: Actions = {
 	create: async (event) => {
 		const user = requireUser(event);
-		const name = String((await event.request.formData()).get('name') ?? '');
+		const name = (await readForm(event.request)).text('name');
 		const result = await forAction(() => createToken(user, name));
 		return result.ok ? { secret: result.value.secret } : result.failure;
 	},
 	revoke: async (event) => {
 		const user = requireUser(event);
-		const id = String((await event.request.formData()).get('id') ?? '');
+		const id = (await readForm(event.request)).text('id');
 		const result = await forAction(() => revokeToken(user, id));
 		return result.ok ? { revoked: true } : result.failure;
 	},
 	/** Ends every session (this one too) and revokes every token; this browser gets a fresh session. */
 	password: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const input = { current: String(form.get('current') ?? ''), password: String(form.get('password') ?? '') };
+		const form = await readForm(event.request);
+		const input = { current: form.text('current'), password: form.text('password') };
 		const result = await forAction(() => changePassword(user, input), { form: 'password' });
 		if (!result.ok) return result.failure;
 		await startSession(event.cookies, user.id);
@@ -47,7 +48,7 @@ export const actions: Actions = {
 	 */
 	everywhere: async (event) => {
 		const user = requireUser(event);
-		const revokeTokens = (await event.request.formData()).get('tokens') === 'on';
+		const revokeTokens = (await readForm(event.request)).checked('tokens');
 		const ended = signOutEverywhere(user, revokeTokens);
 		await startSession(event.cookies, user.id);
 		redirect(303, `/account?ended=everywhere&tokens=${ended.tokens}`);

@@ -4,6 +4,7 @@ import { checkPassword } from '$lib/server/services/users';
 import { startSession } from '$lib/server/session';
 import { forAction } from '$lib/server/http';
 import { safeNext } from '$lib/server/safe-redirect';
+import { readForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = ({ locals, url }) => {
 	if (locals.user) redirect(303, safeNext(url.searchParams.get('next'), url.origin));
@@ -11,9 +12,9 @@ export const load: PageServerLoad = ({ locals, url }) => {
 
 export const actions: Actions = {
 	default: async (event) => {
-		const form = await event.request.formData();
-		const email = String(form.get('email') ?? '');
-		const result = await forAction(() => checkPassword({ email, password: String(form.get('password') ?? '') }, event.getClientAddress()), {
+		const form = await readForm(event.request);
+		const email = form.text('email');
+		const result = await forAction(() => checkPassword({ email, password: form.text('password') }, event.getClientAddress()), {
 			email
 		});
 		if (!result.ok) return result.failure;

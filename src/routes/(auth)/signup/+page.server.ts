@@ -3,6 +3,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { signUp } from '$lib/server/services/users';
 import { startSession } from '$lib/server/session';
 import { forAction } from '$lib/server/http';
+import { readForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = ({ locals }) => {
 	if (locals.user) redirect(303, '/projects');
@@ -10,10 +11,10 @@ export const load: PageServerLoad = ({ locals }) => {
 
 export const actions: Actions = {
 	default: async (event) => {
-		const form = await event.request.formData();
-		const name = String(form.get('name') ?? '');
-		const email = String(form.get('email') ?? '');
-		const result = await forAction(() => signUp({ name, email, password: String(form.get('password') ?? '') }), { name, email });
+		const form = await readForm(event.request);
+		const name = form.text('name');
+		const email = form.text('email');
+		const result = await forAction(() => signUp({ name, email, password: form.text('password') }), { name, email });
 		if (!result.ok) return result.failure;
 		await startSession(event.cookies, result.value.id);
 		redirect(303, '/projects');

@@ -1,6 +1,7 @@
 import type { Actions, PageServerLoad } from './$types';
 import { listUsers, setSiteRole } from '$lib/server/services/users';
 import { forAction, forPage, requireUser } from '$lib/server/http';
+import { readForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -10,8 +11,8 @@ export const load: PageServerLoad = (event) => {
 export const actions: Actions = {
 	role: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const result = await forAction(() => setSiteRole(user, String(form.get('userId') ?? ''), String(form.get('siteRole') ?? '')));
+		const form = await readForm(event.request);
+		const result = await forAction(() => setSiteRole(user, form.text('userId'), form.text('siteRole')));
 		return result.ok ? { changed: true } : result.failure;
 	}
 };

@@ -2,6 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { deleteProject, getProject, updateProject } from '$lib/server/services/projects';
 import { forAction, forPage, requireUser } from '$lib/server/http';
+import { readForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -12,20 +13,20 @@ export const load: PageServerLoad = (event) => {
 export const actions: Actions = {
 	rename: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
+		const form = await readForm(event.request);
 		const result = await forAction(() =>
 			updateProject(user, event.params.projectId, {
-				name: String(form.get('name') ?? ''),
-				description: String(form.get('description') ?? '')
+				name: form.text('name'),
+				description: form.text('description')
 			})
 		);
 		return result.ok ? { saved: true } : result.failure;
 	},
 	delete: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
+		const form = await readForm(event.request);
 		const project = forPage(() => getProject(user, event.params.projectId));
-		if (String(form.get('confirm') ?? '') !== project.name) return { deleteMessage: `Type the project name "${project.name}" to confirm` };
+		if (form.text('confirm') !== project.name) return { deleteMessage: `Type the project name "${project.name}" to confirm` };
 		const result = await forAction(() => deleteProject(user, event.params.projectId));
 		if (!result.ok) return result.failure;
 		redirect(303, '/projects');

@@ -2,6 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { addMember, changeMemberRole, leaveProject, listMembers, removeMember } from '$lib/server/services/projects';
 import { forAction, forPage, requireUser } from '$lib/server/http';
+import { readForm } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -11,25 +12,23 @@ export const load: PageServerLoad = (event) => {
 export const actions: Actions = {
 	add: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const email = String(form.get('email') ?? '');
-		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: String(form.get('role') ?? '') }), {
+		const form = await readForm(event.request);
+		const email = form.text('email');
+		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: form.text('role') }), {
 			email
 		});
 		return result.ok ? { added: result.value.message } : result.failure;
 	},
 	role: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const result = await forAction(() =>
-			changeMemberRole(user, event.params.projectId, String(form.get('userId') ?? ''), String(form.get('role') ?? ''))
-		);
+		const form = await readForm(event.request);
+		const result = await forAction(() => changeMemberRole(user, event.params.projectId, form.text('userId'), form.text('role')));
 		return result.ok ? { changed: true } : result.failure;
 	},
 	remove: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const result = await forAction(() => removeMember(user, event.params.projectId, String(form.get('userId') ?? '')));
+		const form = await readForm(event.request);
+		const result = await forAction(() => removeMember(user, event.params.projectId, form.text('userId')));
 		return result.ok ? { removed: true } : result.failure;
 	},
 	leave: async (event) => {
