@@ -25,6 +25,8 @@ export interface AnnotatedLevelRow {
 	J: string;
 	g: string | null;
 	odd: boolean;
+	/** "3d⁶(⁵D)4s ⁶D"; null when the engine leaves parentage out. */
+	parentage?: string | null;
 	annotation: ExportedNote | null;
 }
 
@@ -48,7 +50,8 @@ export const annotatedLevelColumns: Column<AnnotatedLevelRow>[] = [
 	{ key: 'occurrence', inLatex: false, value: (r) => r.occurrence },
 	{ key: 'J', inLatex: false, value: (r) => r.J },
 	{ key: 'g', latex: '$g_J$ (LS)', align: 'r', value: (r) => r.g, latexValue: (r) => (r.g === null ? '--' : `$${r.g}$`) },
-	...noteColumns<AnnotatedLevelRow>((r) => r.annotation)
+	...noteColumns<AnnotatedLevelRow>((r) => r.annotation),
+	{ key: 'parentage', inLatex: false, value: (r) => r.parentage ?? null }
 ];
 
 /** LaTeX math for an energy as typed, with a true minus: "-12400.5" → "$-12400.5$". */

@@ -14,6 +14,15 @@ describe('symmetricEigen (Householder + QL, Wilkinson & Reinsch 1971)', () => {
 		expect(Math.abs(e.vectors[2] - e.vectors[3])).toBeLessThan(1e-12);
 	});
 
+	it('a matrix mixing 1.8e-15 with denormal and 1e-237 entries gives finite eigenpairs (a case fast-check found)', () => {
+		const a = new Float64Array(9);
+		[a[0], a[3], a[1], a[4]] = [1.7763568394002499e-15, -5e-324, -5e-324, 0];
+		a[6] = a[2] = -2.457103259886601e-237;
+		const e = symmetricEigen(a, 3);
+		expect([...e.values, ...e.vectors].every(Number.isFinite)).toBe(true);
+		expect(e.values[2]).toBeCloseTo(1.7763568394002499e-15, 25);
+	});
+
 	it('the zero matrix and a denormal matrix give orthonormal vectors', () => {
 		for (const x of [0, 5e-324]) {
 			const e = symmetricEigen(Float64Array.from([x, 0, 0, x]), 2);

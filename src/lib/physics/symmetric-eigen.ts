@@ -16,6 +16,9 @@ export interface SymmetricEigen {
 
 const EPS = 2 ** -52;
 
+/** Relative size below which an entry is treated as zero (far below the double epsilon 2.2e-16). */
+const NEGLIGIBLE = 1e-150;
+
 /**
  * Diagonalises the symmetric n×n matrix `a` (row-major, only read; both triangles must be filled).
  * Source: Wilkinson & Reinsch (1971) tred2/tql2. Throws RangeError when the size does not match
@@ -36,7 +39,13 @@ export function symmetricEigen(a: Float64Array, n: number): SymmetricEigen {
 		for (let i = 0; i < n; i++) vectors[i * n + i] = 1;
 		return { n, values: new Float64Array(n), vectors };
 	}
-	const V = Float64Array.from(a, (x) => x / scale);
+	// Entries below NEGLIGIBLE relative to the largest change no eigenpair beyond rounding (Weyl's
+	// inequality: |Δλ| ≤ ‖ΔA‖ ≤ n·NEGLIGIBLE ≪ machine epsilon), but their squares underflow in the
+	// Householder sums and can give 0/0; they are set to zero.
+	const V = Float64Array.from(a, (x) => {
+		const y = x / scale;
+		return Math.abs(y) < NEGLIGIBLE ? 0 : y;
+	});
 	const d = new Float64Array(n);
 	const e = new Float64Array(n);
 	tred2(V, d, e, n);

@@ -122,6 +122,8 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 			gDecimal: level.gDecimal,
 			hundRank: term.hundRank,
 			jRank: term.jOrder.indexOf(ref.J),
+			// Occurrence k of a term is its k-th parentage path (the engine's order), so keys need no change.
+			parentage: term.parentage?.[ref.occurrence - 1]?.label ?? null,
 			annotation: notes.get(key) ?? null
 		};
 	});
