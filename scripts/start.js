@@ -3,6 +3,8 @@
 import { answerClientErrorsAsJson } from './client-error.js';
 
 const port = process.env.PORT ?? '3000';
+// Project backups are uploaded as one file; adapter-node refuses bodies over 512 kB unless told.
+process.env.BODY_SIZE_LIMIT ??= '17M';
 process.env.PORT = port;
 process.env.ORIGIN ??= `http://localhost:${port}`;
 process.env.HOST ??= '127.0.0.1';

@@ -53,6 +53,14 @@ const LISTED: Listed = {
 	'POST /api/v1/match': { summary: 'Line matcher: { levels, lines, tolerance?, types? } → ranked candidates per line', access: 'public' },
 	'GET /api/v1/projects': { summary: 'your projects', access: 'signed-in' },
 	'POST /api/v1/projects': { summary: 'create a project { name, description }', access: 'signed-in' },
+	'GET /api/v1/projects/:projectId/backup': {
+		summary: 'the whole project as one versioned JSON file (download); import it on the Projects page',
+		access: 'owner'
+	},
+	'GET /api/v1/projects/:projectId/activity': {
+		summary: 'the activity log, newest first: ?limit=50&cursor=&actor=<userId>&kind=entry.created',
+		access: 'viewer'
+	},
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },

@@ -224,6 +224,8 @@ export interface ApiResponses {
 	'POST /api/v1/match': MatchResponse;
 	'GET /api/v1/projects': { projects: ProjectListItem[] };
 	'POST /api/v1/projects': { project: ProjectJson };
+	'GET /api/v1/projects/:projectId/backup': null;
+	'GET /api/v1/projects/:projectId/activity': { items: ActivityJson[]; nextCursor: string | null };
 	'GET /api/v1/projects/:projectId': { project: ProjectJson };
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
 	'DELETE /api/v1/projects/:projectId': null;
@@ -256,3 +258,15 @@ export type Sendable<T> = T extends (infer U)[]
 	: T extends object
 		? { [K in keyof T]: K extends DateKeys ? T[K] | Date : Sendable<T[K]> }
 		: T;
+
+/** One line of a project's activity log (GET /api/v1/projects/:projectId/activity). */
+export interface ActivityJson {
+	id: number;
+	actorId: string | null;
+	actorName: string;
+	/** One of the kinds in src/lib/activity.ts. */
+	kind: string;
+	summary: string;
+	subject: string | null;
+	createdAt: string;
+}

@@ -58,10 +58,12 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /admin/outbox': 'admin',
 	'PAGE /projects': 'signed-in',
 	'ACTION /projects ?/create': 'signed-in',
+	'ACTION /projects ?/restore': 'signed-in',
 	'PAGE /projects/:projectId': 'viewer',
 	'ACTION /projects/:projectId ?/rename': 'owner',
 	'ACTION /projects/:projectId ?/delete': 'owner',
 	'PAGE /projects/:projectId/members': 'viewer',
+	'PAGE /projects/:projectId/activity': 'viewer',
 	'ACTION /projects/:projectId/members ?/add': 'owner',
 	'ACTION /projects/:projectId/members ?/role': 'owner',
 	'ACTION /projects/:projectId/members ?/remove': 'owner',
@@ -224,7 +226,8 @@ const SAMPLES: Record<string, Sample> = {
 };
 
 /** Calls that cannot succeed for anyone with a made-up input, so "allowed" means "not refused". */
-const NOT_STRICT = new Set(['ACTION /reset/:token ?/default']);
+// A restore needs a multipart file upload, which this table's url-encoded forms cannot carry.
+const NOT_STRICT = new Set(['ACTION /reset/:token ?/default', 'ACTION /projects ?/restore']);
 
 // ------------------------------------------------------------------ discovery
 

@@ -4,6 +4,7 @@
  */
 import { sql } from 'drizzle-orm';
 import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 
 const now = sql`(unixepoch() * 1000)`;
 
@@ -160,4 +161,32 @@ export const apiTokens = sqliteTable(
 		lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' })
 	},
 	(t) => [index('api_tokens_user_idx').on(t.userId)]
+);
+
+/**
+ * The activity log of a project: who changed what, when, in a short description. Written in the
+ * same transaction as the change it records (services/activity.ts). `actorName` keeps the name the
+ * person had then, so the log still reads when an account is gone. `subject` names what changed
+ * ("entry:<id>", "member:<userId>", …) for links and filters. Kinds: src/lib/activity.ts.
+ */
+export const activityLog = sqliteTable(
+	'activity_log',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		actorId: text('actor_id').references(() => users.id, { onDelete: 'set null' }),
+		actorName: text('actor_name').notNull(),
+		kind: text('kind', { enum: ACTIVITY_KIND_NAMES as [ActivityKind, ...ActivityKind[]] }).notNull(),
+		summary: text('summary').notNull(),
+		subject: text('subject'),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	// The log page reads a project newest first (by id), optionally one person's or one kind's.
+	(t) => [
+		index('activity_project_idx').on(t.projectId, t.id),
+		index('activity_project_actor_idx').on(t.projectId, t.actorId, t.id),
+		index('activity_project_kind_idx').on(t.projectId, t.kind, t.id)
+	]
 );

@@ -9,6 +9,7 @@ import { levelAnnotations, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { entryWarnings, readEntry } from './shelf';
+import { logActivity, noteSummary } from './activity';
 import { newId } from '../ids';
 import { annotationInputSchema, parseInput, reattachSchema } from '../validation';
 import { parseConfiguration } from '../../physics/parse';
@@ -168,6 +169,14 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 				.where(eq(levelAnnotations.id, current.id))
 				.run();
 		}
+		const confirmed = data.status === 'confirmed' && current?.status !== 'confirmed';
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: confirmed ? 'note.confirmed' : 'note.saved',
+			summary: noteSummary(confirmed ? 'confirmed' : current ? 'changed' : 'added', levelText(data.levelKey), entry.title, data),
+			subject: `entry:${entryId}`
+		});
 		return withTexts(tx.select(annotationColumns).from(levelAnnotations).where(attachedOn(entryId, data.levelKey)).get()!);
 	});
 }
@@ -175,9 +184,18 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 /** Deletes the attached note on a level (`levelKey`); detached notes are deleted by id. */
 export function deleteAnnotation(actor: Actor, projectId: string, entryId: string, levelKeyText: string) {
 	projectAccess(actor, projectId, 'editor');
-	readEntry(projectId, entryId);
-	const result = db.delete(levelAnnotations).where(attachedOn(entryId, levelKeyText)).run();
-	if (result.changes === 0) throw notFound(`No note on ${levelText(levelKeyText)}`);
+	const entry = readEntry(projectId, entryId);
+	db.transaction((tx) => {
+		const result = tx.delete(levelAnnotations).where(attachedOn(entryId, levelKeyText)).run();
+		if (result.changes === 0) throw notFound(`No note on ${levelKeyText}`);
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'note.deleted',
+			summary: `deleted the note on ${levelText(levelKeyText)} of “${entry.title}”`,
+			subject: `entry:${entryId}`
+		});
+	});
 }
 
 function noteById(entryId: string, annotationId: string) {

@@ -8,6 +8,7 @@ import { projectAccess, type Actor } from '../access';
 import { ServiceError, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { memberInputSchema, parseInput, projectInputSchema, projectPatchSchema, roleSchema } from '../validation';
+import { logActivity } from './activity';
 
 export function listProjects(actor: Actor) {
 	return db
@@ -36,6 +37,7 @@ export function createProject(actor: Actor, input: unknown) {
 	db.transaction((tx) => {
 		tx.insert(projects).values({ id, name: data.name, description: data.description, createdBy: actor.id }).run();
 		tx.insert(memberships).values({ projectId: id, userId: actor.id, role: 'owner' }).run();
+		logActivity(tx, { projectId: id, actor, kind: 'project.created', summary: `created the project “${data.name}”` });
 	});
 	return getProject(actor, id);
 }
@@ -43,10 +45,14 @@ export function createProject(actor: Actor, input: unknown) {
 export function updateProject(actor: Actor, projectId: string, input: unknown) {
 	projectAccess(actor, projectId, 'owner');
 	const data = parseInput(projectPatchSchema, input);
-	db.update(projects)
-		.set({ ...data, updatedAt: new Date() })
-		.where(eq(projects.id, projectId))
-		.run();
+	db.transaction((tx) => {
+		tx.update(projects)
+			.set({ ...data, updatedAt: new Date() })
+			.where(eq(projects.id, projectId))
+			.run();
+		const changed = [data.name !== undefined && 'name', data.description !== undefined && 'description'].filter(Boolean).join(' and ');
+		logActivity(tx, { projectId, actor, kind: 'project.updated', summary: `changed the project’s ${changed || 'settings'}` });
+	});
 	return getProject(actor, projectId);
 }
 
@@ -79,7 +85,7 @@ export function addMember(actor: Actor, projectId: string, input: unknown) {
 	projectAccess(actor, projectId, 'owner');
 	const data = parseInput(memberInputSchema, input);
 	db.transaction((tx) => {
-		const user = tx.select({ id: users.id }).from(users).where(eq(users.email, data.email)).get();
+		const user = tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, data.email)).get();
 		if (!user) return;
 		const existing = tx
 			.select()
@@ -88,6 +94,13 @@ export function addMember(actor: Actor, projectId: string, input: unknown) {
 			.get();
 		if (existing) throw conflict(`${data.email} is already a member (${existing.role})`, { field: 'email' });
 		tx.insert(memberships).values({ projectId, userId: user.id, role: data.role }).run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.added',
+			summary: `added ${user.name} as ${data.role}`,
+			subject: `member:${user.id}`
+		});
 	});
 	return { email: data.email, role: data.role, message: memberAddedMessage(data.email, data.role) };
 }
@@ -102,7 +115,13 @@ export function leaveProject(actor: Actor, projectId: string) {
 		tx.delete(memberships)
 			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, actor.id)))
 			.run();
+		logActivity(tx, { projectId, actor, kind: 'member.left', summary: `left the project (was ${m.role})`, subject: `member:${actor.id}` });
 	});
+}
+
+/** A member's name for the log. */
+function memberName(userId: string): string {
+	return db.select({ name: users.name }).from(users).where(eq(users.id, userId)).get()?.name ?? 'someone';
 }
 
 function ownerCount(projectId: string): number {
@@ -134,6 +153,13 @@ export function changeMemberRole(actor: Actor, projectId: string, userId: string
 			.set({ role: newRole })
 			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
 			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.role_changed',
+			summary: `changed ${memberName(userId)}’s role from ${m.role} to ${newRole}`,
+			subject: `member:${userId}`
+		});
 	});
 }
 
@@ -146,5 +172,12 @@ export function removeMember(actor: Actor, projectId: string, userId: string) {
 		tx.delete(memberships)
 			.where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
 			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'member.removed',
+			summary: `removed ${memberName(userId)} (${m.role})`,
+			subject: `member:${userId}`
+		});
 	});
 }

@@ -10,6 +10,7 @@ import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { pageSchema, parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
+import { changedFields, logActivity } from './activity';
 import { ConfigurationError, parseConfiguration } from '../../physics/parse';
 import { parseSpecies, type Species } from '../../physics/elements';
 import { checkElectrons, sameConfiguration } from '../../physics/implied';
@@ -196,9 +197,18 @@ export function createEntry(actor: Actor, projectId: string, input: unknown) {
 	checkNotation(data.notation);
 	checkSpecies(data.species);
 	const id = newId();
-	db.insert(shelfEntries)
-		.values({ id, projectId, ...data, createdBy: actor.id, updatedBy: actor.id })
-		.run();
+	db.transaction((tx) => {
+		tx.insert(shelfEntries)
+			.values({ id, projectId, ...data, createdBy: actor.id, updatedBy: actor.id })
+			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'entry.created',
+			summary: `added “${data.title}” (${data.notation}) to the Shelf`,
+			subject: `entry:${id}`
+		});
+	});
 	const entry = readEntry(projectId, id);
 	return { ...entry, warnings: entryWarnings(entry) };
 }
@@ -208,7 +218,7 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 	const { version, ...data } = parseInput(shelfPatchSchema, input);
 	if (data.notation !== undefined) checkNotation(data.notation);
 	if (data.species !== undefined) checkSpecies(data.species);
-	return db.transaction(() => {
+	return db.transaction((tx) => {
 		const current = readEntry(projectId, entryId);
 		if (current.version !== version)
 			throw conflict(
@@ -229,6 +239,13 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 			.set({ ...data, version: version + 1, updatedBy: actor.id, updatedAt: new Date() })
 			.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.version, version)))
 			.run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'entry.updated',
+			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”`,
+			subject: `entry:${entryId}`
+		});
 		const entry = readEntry(projectId, entryId);
 		return { ...entry, warnings: entryWarnings(entry), detachedNotes };
 	});
@@ -236,6 +253,15 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 
 export function deleteEntry(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'editor');
-	readEntry(projectId, entryId);
-	db.delete(shelfEntries).where(eq(shelfEntries.id, entryId)).run();
+	db.transaction((tx) => {
+		const entry = readEntry(projectId, entryId);
+		tx.delete(shelfEntries).where(eq(shelfEntries.id, entryId)).run();
+		logActivity(tx, {
+			projectId,
+			actor,
+			kind: 'entry.deleted',
+			summary: `deleted “${entry.title}” (${entry.notation})`,
+			subject: `entry:${entryId}`
+		});
+	});
 }

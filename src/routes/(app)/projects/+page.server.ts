@@ -1,8 +1,9 @@
-import { redirect } from '@sveltejs/kit';
+import { fail, redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { createProject, listProjects } from '$lib/server/services/projects';
 import { forAction, requireUser } from '$lib/server/http';
 import { readForm } from '$lib/server/forms';
+import { restoreFromForm } from '$lib/server/restore-form';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -17,5 +18,11 @@ export const actions: Actions = {
 		const result = await forAction(() => createProject(user, input));
 		if (!result.ok) return result.failure;
 		redirect(303, `/projects/${result.value.id}`);
+	},
+	/** A backup file (multipart upload) becomes a new project owned by the importer. */
+	restore: async (event) => {
+		const user = requireUser(event);
+		const outcome = await restoreFromForm(user, await event.request.formData());
+		return outcome.ok ? { restored: outcome.report } : fail(outcome.status, { restoreError: outcome.message });
 	}
 };
