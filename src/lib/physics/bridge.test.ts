@@ -87,3 +87,12 @@ describe('ζ as written in the API', () => {
 		expect(() => parseZetaList('2p=1')).toThrow(/write subshell:value pairs/);
 	});
 });
+
+describe('a bridge too large for its jK column', () => {
+	it('4f7 5d 6p keeps its LS and jj sides and says why the jK column is left out (over the jK listing limit)', () => {
+		const b = couplingBridge(parseConfiguration('4f7 5d 6p'));
+		expect(b.jk).toBeNull();
+		expect(b.jkReason).toMatch(/jK column is left out: .*at most \d+ are listed/);
+		expect(b.links.length).toBe(b.ls.length);
+	});
+});

@@ -149,8 +149,10 @@ export function couplingBridge(input: Configuration | readonly Subshell[], zeta:
 	try {
 		jk = jkLevels(subshells);
 	} catch (e) {
-		if (!(e instanceof JkNotApplicable)) throw e;
-		jkReason = e.message;
+		// jK that does not apply, or has more levels than it lists, leaves its column out; LS and jj stay.
+		if (e instanceof JkNotApplicable) jkReason = e.message;
+		else if (e instanceof RangeError) jkReason = `the jK column is left out: ${e.message}`;
+		else throw e;
 	}
 
 	const lsByJ = byJ(ls);

@@ -34,7 +34,12 @@ describe('symmetricEigen (Householder + QL, Wilkinson & Reinsch 1971)', () => {
 		fc.assert(
 			fc.property(
 				fc.integer({ min: 1, max: 12 }),
-				fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: 78, maxLength: 78 }),
+				// Entries in hundredths from −100 to 100: the reference (ml-matrix) itself fails on denormal input,
+				// which the dedicated test above covers for our solver.
+				fc.array(
+					fc.integer({ min: -10000, max: 10000 }).map((x) => x / 100),
+					{ minLength: 78, maxLength: 78 }
+				),
 				(n, pool) => {
 					const a = new Float64Array(n * n);
 					let k = 0;
