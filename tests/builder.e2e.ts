@@ -135,6 +135,9 @@ test('the Term sheet exports as CSV and LaTeX', async ({ page }) => {
 	const texText = readFileSync((await tex.path())!, 'utf8');
 	expect(texText).toContain('\\toprule');
 	expect(texText).toContain('^{7}\\mathrm{S}');
+	// The caption is typeset and the table breaks across pages (longtable package).
+	expect(texText).toContain('\\caption{LS terms and levels of 3d$^{5}$~4s}');
+	expect(texText).toContain('\\begin{longtable}');
 	await shot(page, 'builder-sheet');
 });
 

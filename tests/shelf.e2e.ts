@@ -51,7 +51,7 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	await page.getByRole('link', { name: 'LaTeX' }).click();
 	const tex = await (await download).path().then((p) => import('node:fs').then((fs) => fs.readFileSync(p!, 'utf8')));
 	expect(tex).toContain('\\toprule');
-	expect(tex).toContain('$^{6}\\mathrm{D}_{9/2}$ & $14/9$ & 0 & 0.01 & confirmed');
+	expect(tex).toContain('$^{6}\\mathrm{D}_{9/2}$ & $14/9$ & $0$ & $0.01$ & confirmed');
 
 	// A viewer sees the note but has no way to change it, and the API refuses.
 	const viewer = await newUser(browser, 'Vic Viewer', 'shelf-viewer');
@@ -100,6 +100,8 @@ test('from "Fe II" in the Builder to a saved, annotated and exported level table
 	await expect(page).toHaveURL(/\/shelf\/new\?/);
 	await expect(page.getByLabel('Configuration', { exact: true })).toHaveValue('[Ar] 3d6 4s');
 	await expect(page.getByLabel('Species')).toHaveValue('Fe II');
+	// The title is prefilled from the species and the configuration.
+	await expect(page.getByLabel('Title')).toHaveValue('Fe II [Ar] 3d6 4s');
 	await page.getByLabel('Title').fill('Fe II ground configuration');
 	await page.getByRole('button', { name: 'Save to Shelf' }).click();
 	await expect(page.getByTestId('entry-title')).toHaveText('Fe II ground configuration');

@@ -71,7 +71,7 @@ const LISTED: Listed = {
 	},
 	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },
 	'DELETE /api/v1/projects/:projectId/membership': { summary: 'leave the project (not the last owner)', access: 'viewer' },
-	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf', access: 'viewer' },
+	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf, a page at a time: ?limit=50&cursor=&q=', access: 'viewer' },
 	'POST /api/v1/projects/:projectId/shelf': { summary: 'add a configuration to the Shelf', access: 'editor' },
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { summary: 'one Shelf entry', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { summary: 'change an entry; send the version you read', access: 'editor' },
@@ -79,6 +79,14 @@ const LISTED: Listed = {
 	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'per-level notes', access: 'viewer' },
 	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'create or change one level note', access: 'editor' },
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': { summary: 'delete one level note: ?level=', access: 'editor' },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': {
+		summary: 'reattach a (detached) note to a level { levelKey, version }',
+		access: 'editor'
+	},
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': {
+		summary: 'delete one note, attached or detached',
+		access: 'editor'
+	},
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' }
 };
 

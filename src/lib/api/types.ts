@@ -168,15 +168,24 @@ export interface ShelfEntryJson {
 	createdAt: string;
 	updatedAt: string;
 	updatedBy: string | null;
+	/** Checks that do not stop a save, e.g. species and configuration disagreeing on the electron count. */
+	warnings: string[];
 }
 
 export interface AnnotationJson {
 	id: string;
 	levelKey: string;
 	observedEnergy: number | null;
+	/** The digits as typed ("1880", "19500.12345", "-12400"); show and export these, not the number. */
+	observedEnergyText: string | null;
 	uncertainty: number | null;
+	uncertaintyText: string | null;
 	status: 'proposed' | 'confirmed' | 'disputed';
 	comment: string;
+	/** True when the entry's configuration changed after the note was written; reattach or delete it. */
+	detached: boolean;
+	/** The configuration (as typed) a detached note was written for. */
+	detachedFrom: string | null;
 	version: number;
 	updatedAt: string;
 	updatedBy: string | null;
@@ -225,14 +234,16 @@ export interface ApiResponses {
 	'POST /api/v1/projects/:projectId/members': { result: { email: string; role: ProjectRoleName; message: string } };
 	'GET /api/v1/projects/:projectId/membership': { membership: { role: ProjectRoleName } };
 	'DELETE /api/v1/projects/:projectId/membership': null;
-	'GET /api/v1/projects/:projectId/shelf': { entries: ShelfEntryJson[] };
+	'GET /api/v1/projects/:projectId/shelf': { entries: Omit<ShelfEntryJson, 'warnings'>[]; nextCursor: string | null };
 	'POST /api/v1/projects/:projectId/shelf': { entry: ShelfEntryJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };
-	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson; detachedNotes: number };
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId': null;
 	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotations: AnnotationJson[] };
 	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotation: AnnotationJson };
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': null;
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': { annotation: AnnotationJson };
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': null;
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': null;
 }
 

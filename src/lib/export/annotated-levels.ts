@@ -1,7 +1,19 @@
 /**
  * Columns of the annotated-levels export of a Shelf entry (CSV, JSON, LaTeX).
  */
-import { latexTerm, type Column } from './table';
+import { latexConfiguration, latexEscape, latexTerm, type Column } from './table';
+
+/** A note as the exports need it: the value, the digits as typed, and who changed it when. */
+export interface ExportedNote {
+	observedEnergy: number | null;
+	observedEnergyText: string | null;
+	uncertainty: number | null;
+	uncertaintyText: string | null;
+	status: string;
+	comment: string;
+	updatedBy: string | null;
+	updatedAt: Date | string;
+}
 
 export interface AnnotatedLevelRow {
 	key: string;
@@ -15,14 +27,14 @@ export interface AnnotatedLevelRow {
 	odd: boolean;
 	/** "3d⁶(⁵D)4s ⁶D"; null when the engine leaves parentage out. */
 	parentage?: string | null;
-	annotation: {
-		observedEnergy: number | null;
-		uncertainty: number | null;
-		status: string;
-		comment: string;
-		updatedBy: string | null;
-		updatedAt: Date | string;
-	} | null;
+	annotation: ExportedNote | null;
+}
+
+/** A note detached by a configuration change: its old level key and the configuration it was written for. */
+export interface DetachedNoteRow extends ExportedNote {
+	levelKey: string;
+	levelText: string;
+	detachedFrom: string | null;
 }
 
 const iso = (d: Date | string) => (typeof d === 'string' ? d : d.toISOString());
@@ -38,11 +50,53 @@ export const annotatedLevelColumns: Column<AnnotatedLevelRow>[] = [
 	{ key: 'occurrence', inLatex: false, value: (r) => r.occurrence },
 	{ key: 'J', inLatex: false, value: (r) => r.J },
 	{ key: 'g', latex: '$g_J$ (LS)', align: 'r', value: (r) => r.g, latexValue: (r) => (r.g === null ? '--' : `$${r.g}$`) },
-	{ key: 'observed_energy_cm-1', latex: '$E_\\mathrm{obs}$ (cm$^{-1}$)', align: 'r', value: (r) => r.annotation?.observedEnergy ?? null },
-	{ key: 'uncertainty_cm-1', latex: '$\\sigma$ (cm$^{-1}$)', align: 'r', value: (r) => r.annotation?.uncertainty ?? null },
-	{ key: 'status', latex: 'Status', value: (r) => r.annotation?.status ?? null },
-	{ key: 'comment', latex: 'Comment', value: (r) => r.annotation?.comment ?? null },
-	{ key: 'updated_by', inLatex: false, value: (r) => r.annotation?.updatedBy ?? null },
-	{ key: 'updated_at', inLatex: false, value: (r) => (r.annotation ? iso(r.annotation.updatedAt) : null) },
+	...noteColumns<AnnotatedLevelRow>((r) => r.annotation),
 	{ key: 'parentage', inLatex: false, value: (r) => r.parentage ?? null }
+];
+
+/** LaTeX math for an energy as typed, with a true minus: "-12400.5" → "$-12400.5$". */
+const latexNumber = (text: string | null) => (text === null ? '' : `$${text}$`);
+
+/**
+ * The note columns shared by the level table and the detached notes: CSV and LaTeX carry the
+ * digits as typed (1880 stays 1880, 19500.12345 unrounded); JSON carries the number and the text.
+ */
+function noteColumns<R>(note: (r: R) => ExportedNote | null): Column<R>[] {
+	return [
+		{
+			key: 'observed_energy_cm-1',
+			latex: '$E_\\mathrm{obs}$ (cm$^{-1}$)',
+			align: 'r',
+			value: (r) => note(r)?.observedEnergyText ?? null,
+			jsonValue: (r) => note(r)?.observedEnergy ?? null,
+			latexValue: (r) => latexNumber(note(r)?.observedEnergyText ?? null)
+		},
+		{ key: 'observed_energy_as_typed', only: ['json'], value: (r) => note(r)?.observedEnergyText ?? null },
+		{
+			key: 'uncertainty_cm-1',
+			latex: '$\\sigma$ (cm$^{-1}$)',
+			align: 'r',
+			value: (r) => note(r)?.uncertaintyText ?? null,
+			jsonValue: (r) => note(r)?.uncertainty ?? null,
+			latexValue: (r) => latexNumber(note(r)?.uncertaintyText ?? null)
+		},
+		{ key: 'uncertainty_as_typed', only: ['json'], value: (r) => note(r)?.uncertaintyText ?? null },
+		{ key: 'status', latex: 'Status', value: (r) => note(r)?.status ?? null },
+		{ key: 'comment', latex: 'Comment', value: (r) => note(r)?.comment ?? null },
+		{ key: 'updated_by', inLatex: false, value: (r) => note(r)?.updatedBy ?? null },
+		{ key: 'updated_at', inLatex: false, value: (r) => (note(r) ? iso(note(r)!.updatedAt) : null) }
+	];
+}
+
+/** Columns of the detached notes, listed after the levels in every export. */
+export const detachedNoteColumns: Column<DetachedNoteRow>[] = [
+	{ key: 'detached_level', latex: 'Level (earlier configuration)', value: (r) => r.levelText, latexValue: (r) => latexEscape(r.levelText) },
+	{ key: 'detached_level_key', inLatex: false, value: (r) => r.levelKey },
+	{
+		key: 'detached_from',
+		latex: 'Written for',
+		value: (r) => r.detachedFrom,
+		latexValue: (r) => (r.detachedFrom ? latexConfiguration(r.detachedFrom) : '')
+	},
+	...noteColumns<DetachedNoteRow>((r) => r)
 ];

@@ -1,6 +1,6 @@
 import { parseConfiguration } from '../physics/parse';
 import { describe, expect, it } from 'vitest';
-import { csvSafeCell, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
+import { csvSafeCell, latexConfiguration, latexEscape, latexTerm, toCsv, toLatex, type Column } from './table';
 import { latexLabel, levelColumns, levelRows } from './term-sheet';
 import { termSheet } from '../physics/report';
 
@@ -61,7 +61,7 @@ describe('exports', () => {
 		expect(tex).toContain('\\toprule');
 		expect(tex).toContain('\\midrule');
 		expect(tex).toContain('\\bottomrule');
-		expect(tex).toContain('\\begin{tabular}{lr}');
+		expect(tex).toContain('\\begin{longtable}{lr}');
 		expect(tex).toContain('x\\_1 &  \\\\');
 	});
 
@@ -85,5 +85,23 @@ describe('exports', () => {
 		expect(csv).toContain('4S°,1,2p³ ⁴S°');
 		expect(latexLabel('3d⁵(⁶S)4s(⁷S)4p ⁸P°')).toBe('3d$^{5}$($^{6}$S)4s($^{7}$S)4p $^{8}$P$^{\\circ}$');
 		expect(latexLabel('2p⁵(²P°₃/₂)3p ²[5/2]₃')).toBe('2p$^{5}$($^{2}$P$^{\\circ}$$_{3/2}$)3p $^{2}$[5/2]$_{3}$');
+	});
+
+	// longtable package manual (Carlisle): \endfirsthead, \endhead, \endfoot, \endlastfoot.
+	it('long tables break across pages: longtable with the header repeated and a typeset caption', () => {
+		const rows = Array.from({ length: 80 }, (_, i) => ({ name: `r${i}`, value: i }));
+		const tex = toLatex(rows, columns, { text: 'Levels of 3d6 4s', latex: `Levels of ${latexConfiguration('3d6 4s')}` });
+		expect(tex).toContain('\\usepackage{longtable}');
+		expect(tex).not.toContain('\\begin{table}');
+		for (const cmd of ['\\endfirsthead', '\\endhead', '\\endfoot', '\\endlastfoot']) expect(tex).toContain(cmd);
+		expect(tex).toContain('\\caption{Levels of 3d$^{6}$~4s}');
+		expect(tex.split('\n').filter((l) => /^ {2}r\d+ & /.test(l))).toHaveLength(80);
+	});
+
+	it('configurations in LaTeX keep the core as typed and raise occupancies: [Ar] 3d6 4s, 4f⁷5d6s², 2p^{3}', () => {
+		// Spectroscopic notation with superscript occupancies (Cowan 1981 §1-5), core shorthand as typed.
+		expect(latexConfiguration('[Ar] 3d6 4s')).toBe('[Ar]~3d$^{6}$~4s');
+		expect(latexConfiguration('[Xe] 4f⁷5d6s²')).toBe('[Xe]~4f$^{7}$~5d~6s$^{2}$');
+		expect(latexConfiguration('1s2.2s2.2p^{3}')).toBe('1s$^{2}$~2s$^{2}$~2p$^{3}$');
 	});
 });

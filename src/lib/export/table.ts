@@ -16,7 +16,22 @@ export interface Column<R> {
 	latexValue?: (row: R) => string;
 	/** False to leave the column out of the LaTeX table (e.g. audit columns). */
 	inLatex?: boolean;
+	/** The formats that carry this column (default: all, subject to `inLatex`). */
+	only?: readonly ExportFormat[];
+	/** JSON value when it differs from `value` (e.g. a number where CSV keeps the digits as typed). */
+	jsonValue?: (row: R) => unknown;
 }
+
+/** A caption as plain text (CSV/JSON readers) and as typeset LaTeX. */
+export interface Caption {
+	text: string;
+	latex: string;
+}
+
+const inFormat =
+	(format: ExportFormat) =>
+	<R>(c: Column<R>) =>
+		(c.only ? c.only.includes(format) : true) && (format !== 'tex' || c.inLatex !== false);
 
 export type ExportFormat = 'csv' | 'json' | 'tex';
 export const EXPORT_FORMATS: readonly ExportFormat[] = ['csv', 'json', 'tex'];
@@ -46,16 +61,22 @@ export function csvSafeCell(value: string | number | null): string | number {
 }
 
 /** CSV (RFC 4180 through papaparse) with every text cell neutralised by `csvSafeCell`. */
-export function toCsv<R>(rows: readonly R[], columns: readonly Column<R>[]): string {
+export function toCsv<R>(rows: readonly R[], allColumns: readonly Column<R>[]): string {
+	const columns = allColumns.filter(inFormat('csv'));
 	return Papa.unparse({
 		fields: columns.map((c) => String(csvSafeCell(c.key))),
 		data: rows.map((r) => columns.map((c) => csvSafeCell(c.value(r))))
 	});
 }
 
+/** The rows as JSON objects keyed by column. */
+export function jsonRows<R>(rows: readonly R[], allColumns: readonly Column<R>[]): Record<string, unknown>[] {
+	const columns = allColumns.filter(inFormat('json'));
+	return rows.map((r) => Object.fromEntries(columns.map((c) => [c.key, c.jsonValue ? c.jsonValue(r) : c.value(r)])));
+}
+
 export function toJson<R>(rows: readonly R[], columns: readonly Column<R>[], meta: Record<string, unknown> = {}): string {
-	const data = rows.map((r) => Object.fromEntries(columns.map((c) => [c.key, c.value(r)])));
-	return JSON.stringify({ ...meta, rows: data }, null, 2);
+	return JSON.stringify({ ...meta, rows: jsonRows(rows, columns) }, null, 2);
 }
 
 const LATEX_SPECIALS: Record<string, string> = {
@@ -76,13 +97,39 @@ export function latexEscape(text: string): string {
 	return text.replace(/[\\&%$#_{}~^]/g, (ch) => LATEX_SPECIALS[ch]);
 }
 
+const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+
 /**
- * A booktabs table (needs \usepackage{booktabs}) in a table environment with a caption.
+ * A configuration in LaTeX text mode with its core as typed and superscript occupancies:
+ * "[Ar] 3d6 4s" → "[Ar]~3d$^{6}$~4s", "3d⁵" → "3d$^{5}$" (spectroscopic notation, e.g. Cowan 1981 §1-5).
+ * @example latexConfiguration('[Ne] 3s2 3p') // '[Ne]~3s$^{2}$~3p'
  */
-export function toLatex<R>(rows: readonly R[], allColumns: readonly Column<R>[], caption: string): string {
-	const columns = allColumns.filter((c) => c.inLatex !== false);
+export function latexConfiguration(notation: string): string {
+	return (
+		notation
+			.trim()
+			.split(/[\s.·⋅]+/u)
+			// Pieces written with superscripts may run together (4f⁷5d6s²): one subshell each.
+			.flatMap((piece) => (/^(?:\d+\p{Ll}[⁰¹²³⁴⁵⁶⁷⁸⁹]*)+$/u.test(piece) ? piece.match(/\d+\p{Ll}[⁰¹²³⁴⁵⁶⁷⁸⁹]*/gu)! : [piece]))
+			.map((piece) => {
+				const m = /^(\d+\p{Ll})(?:\^?\{?(\d+)\}?|([⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/u.exec(piece);
+				if (!m) return latexEscape(piece);
+				const occ = m[2] ?? (m[3] ? [...m[3]].map((c) => SUPERSCRIPT_DIGITS.indexOf(c)).join('') : '');
+				return occ ? `${m[1]}$^{${occ}}$` : m[1];
+			})
+			.join('~')
+	);
+}
+
+/**
+ * A long table that breaks across pages (packages booktabs and longtable), with the header
+ * repeated on each page and the caption typeset. Columns with `inLatex: false` are left out.
+ */
+export function toLatex<R>(rows: readonly R[], allColumns: readonly Column<R>[], caption: Caption | string): string {
+	const columns = allColumns.filter(inFormat('tex'));
 	const spec = columns.map((c) => c.align ?? 'l').join('');
 	const head = columns.map((c) => c.latex ?? latexEscape(c.key)).join(' & ');
+	const captionTex = typeof caption === 'string' ? latexEscape(caption) : caption.latex;
 	const body = rows.map(
 		(r) =>
 			columns
@@ -94,18 +141,24 @@ export function toLatex<R>(rows: readonly R[], allColumns: readonly Column<R>[],
 				.join(' & ') + ' \\\\'
 	);
 	return [
-		'% Requires \\usepackage{booktabs}',
-		'\\begin{table}',
-		'  \\centering',
-		`  \\caption{${latexEscape(caption)}}`,
-		`  \\begin{tabular}{${spec}}`,
-		'    \\toprule',
-		`    ${head} \\\\`,
-		'    \\midrule',
-		...body.map((b) => `    ${b}`),
-		'    \\bottomrule',
-		'  \\end{tabular}',
-		'\\end{table}',
+		'% Requires \\usepackage{booktabs} and \\usepackage{longtable}',
+		`\\begin{longtable}{${spec}}`,
+		`  \\caption{${captionTex}} \\\\`,
+		'  \\toprule',
+		`  ${head} \\\\`,
+		'  \\midrule',
+		'  \\endfirsthead',
+		`  \\multicolumn{${columns.length}}{l}{\\emph{(continued)}} \\\\`,
+		'  \\toprule',
+		`  ${head} \\\\`,
+		'  \\midrule',
+		'  \\endhead',
+		`  \\midrule \\multicolumn{${columns.length}}{r}{\\emph{(continued on the next page)}} \\\\`,
+		'  \\endfoot',
+		'  \\bottomrule',
+		'  \\endlastfoot',
+		...body.map((b) => `  ${b}`),
+		'\\end{longtable}',
 		''
 	].join('\n');
 }
@@ -114,7 +167,7 @@ export function render<R>(
 	format: ExportFormat,
 	rows: readonly R[],
 	columns: readonly Column<R>[],
-	caption: string,
+	caption: Caption | string,
 	meta: Record<string, unknown> = {}
 ): string {
 	if (format === 'csv') return toCsv(rows, columns);

@@ -224,6 +224,39 @@ describe('ground configurations of positive ions', () => {
 		expect(groundConfiguration('Fe XXVI').notation).toBe('1s');
 	});
 
+	it('Pa II 5f2 7s2, Ac III 7s, U III 5f4: actinide ions where removing the outermost electrons guesses wrong', () => {
+		// NIST ASD ground levels, from memory: Pa II ³H₄ 5f²7s², Ac III ²S₁/₂ 7s (Fr-like, 6d just above),
+		// U III ⁵I₄ 5f⁴. The removal rule would give 5f² 6d 7s, 6d and 5f³ 6d.
+		for (const [s, n] of [
+			['Pa II', '[Rn] 5f2 7s2'],
+			['Ac III', '[Rn] 7s'],
+			['U III', '[Rn] 5f4']
+		]) {
+			const g = groundConfiguration(s);
+			expect(g.notation).toBe(n);
+			expect(g.caution).toBeNull();
+		}
+	});
+
+	it('the removal rule stays where it agrees with the tables: Th II 6d2 7s, U IV 5f3, Pa IV 5f2, Pu II 5f6 7s', () => {
+		// NIST ASD ground levels, from memory: Th II ⁴F₃/₂ 6d²7s, U IV ⁴I°₉/₂ 5f³, Pa IV ³H₄ 5f², Pu II ⁸F₁/₂ 5f⁶7s.
+		expect(groundConfiguration('Th II').notation).toBe('[Rn] 6d2 7s');
+		expect(groundConfiguration('U IV').notation).toBe('[Rn] 5f3');
+		expect(groundConfiguration('Pa IV').notation).toBe('[Rn] 5f2');
+		expect(groundConfiguration('Pu II').notation).toBe('[Rn] 5f6 7s');
+	});
+
+	it('one-electron ions (H-like) are 1s exactly and carry no ion caution: He II, C VI, Fe XXVI, U XCII', () => {
+		// A single electron has the hydrogen-like ground state 1s ²S₁/₂ (general fact).
+		for (const s of ['He II', 'C VI', 'Fe XXVI', 'U XCII']) {
+			const g = groundConfiguration(s);
+			expect(g.notation).toBe('1s');
+			expect(g.caution).toBeNull();
+		}
+		// Two electrons are still computed by the rule and keep the caution.
+		expect(groundConfiguration('Fe XXV').caution).toBe(ION_CAUTION);
+	});
+
 	it('every ion has Z − charge electrons', () => {
 		for (let Z = 1; Z <= 103; Z++) {
 			for (let q = 0; q < Z; q += Math.max(1, Math.floor(Z / 7))) {

@@ -101,6 +101,9 @@ const NEUTRAL_EXCEPTIONS: Readonly<Record<string, string>> = {
  * only cases the author is sure of are listed: V II 3d⁴ a⁵D, Co II 3d⁸ a³F, Ni II 3d⁹ ²D,
  * Y II 5s² ¹S, La II 5d² a³F, Ce II 4f 5d² ⁴H°, Ce III 4f² ³H, Hf II 5d 6s² ²D, Lu II 6s² ¹S,
  * Lu III 6s ²S, Ac II 7s² ¹S, Th III 5f 6d ³H°, Th IV 5f ²F°, U II 5f³ 7s² ⁴I°).
+ * Added after checking the actinide ions where the removal rule's guess differs from those
+ * ground levels (also from memory of NIST ASD): Pa II 5f² 7s² ³H₄ (the rule gives 5f² 6d 7s),
+ * Ac III 7s ²S₁/₂ (the rule gives 6d), U III 5f⁴ ⁵I₄ (the rule gives 5f³ 6d).
  */
 const ION_EXCEPTIONS: Readonly<Record<string, string>> = {
 	'V II': '[Ar] 3d4',
@@ -116,7 +119,10 @@ const ION_EXCEPTIONS: Readonly<Record<string, string>> = {
 	'Ac II': '[Rn] 7s2',
 	'Th III': '[Rn] 5f 6d',
 	'Th IV': '[Rn] 5f',
-	'U II': '[Rn] 5f3 7s2'
+	'U II': '[Rn] 5f3 7s2',
+	'Ac III': '[Rn] 7s',
+	'Pa II': '[Rn] 5f2 7s2',
+	'U III': '[Rn] 5f4'
 };
 
 /** Shown with every ion not in the table of observed ion ground configurations. */
@@ -398,6 +404,11 @@ export function groundConfiguration(input: Species | string): GroundConfiguratio
 		if (tabulated) {
 			configuration = withCore(parseConfiguration(tabulated));
 			source = `${label}: observed ground configuration (NIST Atomic Spectra Database ground level), which differs from the removal rule`;
+			caution = null;
+		} else if (Z - charge === 1) {
+			// One electron left: the ground configuration is 1s, exactly (hydrogen-like ion).
+			configuration = configurationOf([{ n: 1, l: 0, occupancy: 1 }]);
+			source = `${label}: one electron left, so the ground configuration is 1s (hydrogen-like ion)`;
 			caution = null;
 		} else {
 			configuration = withCore(configurationOf(removeElectrons(neutral.subshells, charge)));

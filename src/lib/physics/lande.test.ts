@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import Fraction from 'fraction.js';
-import { GS_FREE_ELECTRON, effectiveMagnetonNumber, fractionString, landeG } from './lande';
+import { GS_FREE_ELECTRON, effectiveMagnetonNumber, fractionString, landeG, landeGsForm } from './lande';
 
 /** g as a string, failing the test when it is null. */
 function g(twoS: number, L: number, twoJ: number): string {
@@ -137,5 +137,23 @@ describe('errors and formatting', () => {
 		expect(fractionString(new Fraction(4, 2))).toBe('2');
 		expect(fractionString(new Fraction(-1, 2))).toBe('-1/2');
 		expect(fractionString(new Fraction(0))).toBe('0');
+	});
+
+	it('the exact form in g_s matches the free-electron decimal: ²P₃/₂ = 2/3 + 1/3 g_s, ⁶D₉/₂ = 4/9 + 5/9 g_s, ⁴D₁/₂ = 2 − g_s', () => {
+		// General Landé formula with g_L = 1 (Condon & Shortley 1935; Cowan 1981, Zeeman-effect chapters).
+		expect(landeGsForm('4/3')).toEqual({ constant: '2/3', gsCoefficient: '1/3' });
+		expect(landeGsForm('14/9')).toEqual({ constant: '4/9', gsCoefficient: '5/9' });
+		expect(landeGsForm('0')).toEqual({ constant: '2', gsCoefficient: '-1' });
+		for (const [twoS, L, twoJ] of [
+			[1, 1, 3],
+			[5, 2, 9],
+			[3, 2, 1],
+			[2, 3, 4],
+			[6, 0, 6]
+		]) {
+			const form = landeGsForm(fractionString(landeG(twoS, L, twoJ)!));
+			const value = new Fraction(form.constant).valueOf() + new Fraction(form.gsCoefficient).valueOf() * GS_FREE_ELECTRON;
+			expect(Math.abs(value - (landeG(twoS, L, twoJ, { gs: GS_FREE_ELECTRON }) as number))).toBeLessThan(FLOAT_TOLERANCE);
+		}
 	});
 });

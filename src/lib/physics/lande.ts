@@ -85,3 +85,22 @@ export function fractionString(f: Fraction): string {
 	const sign = f.s < 0n && f.n !== 0n ? '-' : '';
 	return f.d === 1n ? `${sign}${f.n}` : `${sign}${f.n}/${f.d}`;
 }
+
+/** g_J written exactly with the spin g-factor as a symbol: g_J = constant + gsCoefficient · g_s. */
+export interface GsForm {
+	/** [J(J+1) − S(S+1) + L(L+1)] / [2J(J+1)], the orbital part (g_L = 1), e.g. "1/3". */
+	constant: string;
+	/** [J(J+1) + S(S+1) − L(L+1)] / [2J(J+1)], the factor of g_s, e.g. "2/3". */
+	gsCoefficient: string;
+}
+
+/**
+ * The exact form of g_J for any g_s, from its g_s = 2 value g: the general Landé formula (module
+ * comment) is a + b·g_s with a + b = 1, and g = a + 2b, so b = g − 1 and a = 2 − g. It matches the
+ * decimal computed with g_s = GS_FREE_ELECTRON. Throws (fraction.js) when `g2` is not a fraction.
+ * @example landeGsForm('4/3') // { constant: '2/3', gsCoefficient: '1/3' } (²P₃/₂: 2/3 + g_s/3)
+ */
+export function landeGsForm(g2: string): GsForm {
+	const g = new Fraction(g2);
+	return { constant: fractionString(new Fraction(2).sub(g)), gsCoefficient: fractionString(g.sub(1)) };
+}

@@ -69,7 +69,7 @@ describe('level annotations', () => {
 		expect(csv).toContain('3P J=1,3P,1,1,3/2,112,,confirmed,,Ed Itor,');
 		const tex = exportAnnotatedLevels(viewer, projectId, entryId, 'tex');
 		expect(tex.filename).toBe('O_III_1s2_2s2_2p2.tex');
-		expect(tex.body).toContain('$^{3}\\mathrm{P}_{1}$ & $3/2$ & 112 &  & confirmed');
+		expect(tex.body).toContain('$^{3}\\mathrm{P}_{1}$ & $3/2$ & $112$ &  & confirmed');
 		expect(tex.body).not.toContain('Ed Itor');
 	});
 });

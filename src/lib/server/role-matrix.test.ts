@@ -73,6 +73,8 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
 	'ACTION /projects/:projectId/shelf/:entryId ?/update': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
 };
 
@@ -146,6 +148,7 @@ beforeAll(async () => {
 function freshProject() {
 	const projectId = newId();
 	const entryId = newId();
+	const annotationId = newId();
 	db.transaction((tx) => {
 		tx.insert(projects).values({ id: projectId, name: 'Matrix nebula', createdBy: people.owner.id }).run();
 		for (const [who, role] of [
@@ -156,9 +159,9 @@ function freshProject() {
 		] as const)
 			tx.insert(memberships).values({ projectId, userId: people[who].id, role }).run();
 		tx.insert(shelfEntries).values({ id: entryId, projectId, title: 'Carbon-like ground', notation: '1s2 2s2 2p2' }).run();
-		tx.insert(levelAnnotations).values({ id: newId(), entryId, levelKey: '3P#1|2', observedEnergy: 43.4, status: 'proposed' }).run();
+		tx.insert(levelAnnotations).values({ id: annotationId, entryId, levelKey: '3P#1|2', observedEnergy: 43.4, status: 'proposed' }).run();
 	});
-	return { projectId, entryId };
+	return { projectId, entryId, annotationId };
 }
 
 /** Undoes what an allowed call may have changed on the actors themselves (passwords, tokens, site roles). */
@@ -171,7 +174,7 @@ async function restoreActors() {
 
 // ------------------------------------------------------------------ sample inputs (so that allowed calls succeed)
 
-type Ctx = { projectId: string; entryId: string; actor: Actor | null; n: number };
+type Ctx = { projectId: string; entryId: string; annotationId: string; actor: Actor | null; n: number };
 type Sample = { query?: string; body?: Record<string, unknown>; form?: (ctx: Ctx) => Record<string, string>; json?: (ctx: Ctx) => unknown };
 
 const SAMPLES: Record<string, Sample> = {
@@ -189,6 +192,7 @@ const SAMPLES: Record<string, Sample> = {
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { json: () => ({ title: 'Renamed', version: 1 }) },
 	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { json: () => ({ levelKey: '3P#1|1', observedEnergy: 16.4 }) },
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': { query: '?level=3P%231%7C2' },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': { json: () => ({ levelKey: '3P#1|1', version: 1 }) },
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { query: '?format=csv' },
 	'ACTION /signin ?/default': { form: () => ({ email: 'signin@matrix.example', password: PASSWORD }) },
 	'ACTION /signup ?/default': { form: (c) => ({ name: 'New Person', email: `new${c.n}@matrix.example`, password: PASSWORD }) },
@@ -214,6 +218,10 @@ const SAMPLES: Record<string, Sample> = {
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': {
 		form: () => ({ levelKey: '3P#1|1', observedEnergy: '16.4', status: 'proposed' })
+	},
+	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': {
+		form: (c) => ({ annotationId: c.annotationId, levelKey: '3P#1|1', version: '1' })
 	}
 };
 
@@ -332,7 +340,12 @@ const cookieJar = () => {
 
 function eventFor(cell: Cell, actorName: ActorName, ctx: Ctx): RequestEvent {
 	const sample = SAMPLES[cell.key] ?? {};
-	const params: Record<string, string> = { projectId: ctx.projectId, entryId: ctx.entryId, token: 'not-a-live-reset-token' };
+	const params: Record<string, string> = {
+		projectId: ctx.projectId,
+		entryId: ctx.entryId,
+		annotationId: ctx.annotationId,
+		token: 'not-a-live-reset-token'
+	};
 	const pathname = cell.path.replace(/:(\w+)/g, (_, p: string) => encodeURIComponent(params[p]));
 	const url = new URL(`http://localhost${pathname}${sample.query ?? ''}`);
 	const { user, token } = actorOf(actorName);

@@ -4,6 +4,7 @@
 import { z } from 'zod';
 import { ASSIGNMENT_STATUSES, PROJECT_ROLES, SITE_ROLES } from './db/schema';
 import { badRequest } from './errors';
+import { numberText, parseEnergyText } from '../energyText';
 
 const trimmed = (label: string, max: number) =>
 	z
@@ -60,40 +61,98 @@ const tagSchema = z
 	.max(40, 'A tag must be at most 40 characters')
 	.regex(/^[\p{L}\p{N} ._+\-/]+$/u, 'A tag may hold letters, digits, spaces and . _ + - /');
 
-export const shelfInputSchema = z.object({
+const shelfFields = {
 	title: trimmed('Title', 160),
-	species: z.string({ error: 'Species must be text' }).trim().max(20, 'Species must be at most 20 characters').default(''),
+	species: z.string({ error: 'Species must be text' }).trim().max(20, 'Species must be at most 20 characters'),
 	notation: trimmed('Configuration', 200),
-	notes: z.string({ error: 'Notes must be text' }).max(10000, 'Notes must be at most 10000 characters').default(''),
-	tags: z.array(tagSchema, { error: 'Tags must be a list of words' }).max(20, 'At most 20 tags').default([])
+	notes: z.string({ error: 'Notes must be text' }).max(10000, 'Notes must be at most 10000 characters'),
+	tags: z.array(tagSchema, { error: 'Tags must be a list of words' }).max(20, 'At most 20 tags')
+};
+
+export const shelfInputSchema = z.object({
+	...shelfFields,
+	species: shelfFields.species.default(''),
+	notes: shelfFields.notes.default(''),
+	tags: shelfFields.tags.default([])
 });
 
-export const shelfPatchSchema = shelfInputSchema.partial().extend({
-	version: z
-		.number({ error: 'version must be the number you last read' })
-		.int('version must be a whole number')
-		.positive('version must be the number you last read (1 or more)')
-});
+/** A partial edit: only the fields sent are changed (no defaults here, or a missing field would be cleared). */
+export const shelfPatchSchema = z
+	.object(shelfFields)
+	.partial()
+	.extend({
+		version: z
+			.number({ error: 'version must be the number you last read' })
+			.int('version must be a whole number')
+			.positive('version must be the number you last read (1 or more)')
+	});
 
-export const annotationInputSchema = z.object({
+/**
+ * An energy in cm⁻¹ as a JSON number or as text read by `parseEnergyText` (so "19 000" and "−12400"
+ * are read the same way as in the form); null or '' for none. Output: the value and the digits as typed.
+ */
+const energyField = (what: string, min: number, max: number, range: string) =>
+	z
+		.union([z.number(), z.string(), z.null()], { error: `${what} must be a number in cm⁻¹` })
+		.transform((v, ctx): { value: number; text: string } | null => {
+			if (v === null) return null;
+			let read: { value: number; text: string };
+			if (typeof v === 'number') {
+				if (!Number.isFinite(v)) {
+					ctx.addIssue({ code: 'custom', message: `${what} must be a number in cm⁻¹` });
+					return z.NEVER;
+				}
+				read = { value: v, text: numberText(v) };
+			} else {
+				const r = parseEnergyText(v, what);
+				if (r === null) return null;
+				if (!r.ok) {
+					ctx.addIssue({ code: 'custom', message: r.message });
+					return z.NEVER;
+				}
+				read = r;
+			}
+			if (read.value < min || read.value > max) {
+				ctx.addIssue({ code: 'custom', message: `${what} must be ${range}` });
+				return z.NEVER;
+			}
+			return { value: read.value, text: read.text };
+		});
+
+export const annotationInputSchema = z
+	.object({
+		levelKey: z.string().trim().min(1, 'Level must not be empty').max(80, 'Level key must be at most 80 characters'),
+		observedEnergy: energyField('Observed energy', -1e7, 1e7, 'between −10⁷ and 10⁷ cm⁻¹').default(null),
+		uncertainty: energyField('Uncertainty', 0, 1e6, 'from 0 to 10⁶ cm⁻¹; it must not be negative').default(null),
+		status: z.enum(ASSIGNMENT_STATUSES, { error: `Status must be one of ${ASSIGNMENT_STATUSES.join(', ')}` }).default('proposed'),
+		comment: z.string().max(2000, 'Comment must be at most 2000 characters').default(''),
+		version: z.number().int().positive().optional()
+	})
+	.superRefine((a, ctx) => {
+		if (a.uncertainty !== null && a.observedEnergy === null)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['uncertainty'],
+				message: 'An uncertainty needs an observed energy: give the energy as well, or clear the ± field'
+			});
+	});
+
+/** Reattaching a detached note to a level of the entry's present configuration. */
+export const reattachSchema = z.object({
 	levelKey: z.string().trim().min(1, 'Level must not be empty').max(80, 'Level key must be at most 80 characters'),
-	observedEnergy: z
-		.number({ error: 'Observed energy must be a number in cm⁻¹' })
-		.finite()
-		.min(-1e7, 'Observed energy must be between −10⁷ and 10⁷ cm⁻¹')
-		.max(1e7, 'Observed energy must be between −10⁷ and 10⁷ cm⁻¹')
-		.nullable()
-		.default(null),
-	uncertainty: z
-		.number({ error: 'Uncertainty must be a number in cm⁻¹' })
-		.finite()
-		.nonnegative('Uncertainty must not be negative')
-		.max(1e6, 'Uncertainty must be at most 10⁶ cm⁻¹')
-		.nullable()
-		.default(null),
-	status: z.enum(ASSIGNMENT_STATUSES, { error: `Status must be one of ${ASSIGNMENT_STATUSES.join(', ')}` }).default('proposed'),
-	comment: z.string().max(2000, 'Comment must be at most 2000 characters').default(''),
-	version: z.number().int().positive().optional()
+	version: z.number({ error: 'version must be the number you last read' }).int().positive()
+});
+
+/** Paging of long lists: `limit` (1 … 200, default 50) and the `cursor` from the previous page. */
+export const pageSchema = z.object({
+	limit: z.coerce
+		.number({ error: 'limit must be a whole number from 1 to 200' })
+		.int('limit must be a whole number from 1 to 200')
+		.min(1, 'limit must be a whole number from 1 to 200')
+		.max(200, 'limit must be a whole number from 1 to 200')
+		.default(50),
+	cursor: z.string().max(200, 'cursor is not one this server gave out').optional(),
+	q: z.string().trim().max(100, 'the filter text must be at most 100 characters').optional()
 });
 
 /** Splits "a, b ,c" into tags. */

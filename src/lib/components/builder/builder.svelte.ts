@@ -1,10 +1,11 @@
 /**
  * The Builder's configuration, held two ways that stay in sync: the chips on the Rail and the
  * notation text. The text is what the user typed (kept as typed); the Rail follows it whenever it
- * parses. Rail edits rewrite the text in the engine's normalized form (formatConfiguration),
- * keeping a noble-gas core written as a core.
+ * parses. Rail edits rewrite the text in the Rail's order (the parser accepts any order), keeping a
+ * noble-gas core written as a core; typed text puts the Rail in the text's order. So the Rail and
+ * the notation field always show the subshells in the same order.
  */
-import { ConfigurationError, formatConfiguration, parseConfiguration } from '$lib/physics/parse';
+import { ConfigurationError, parseConfiguration, subshellLabel } from '$lib/physics/parse';
 import type { Configuration } from '$lib/physics/types';
 import { CORE_SPECS, TRAY_SPECS, capacityOf, coreKey, coreName, freshId, inCore, subshellKey, type Chip } from './chips';
 
@@ -14,11 +15,26 @@ export interface NotationProblem {
 	token: string;
 }
 
-/** Text of a Rail: "[Ar] 3d5 4s". Subshells are normalized by the engine's formatter (n, then l). */
+/** Text of a Rail in the Rail's order: "[Ar] 4s 3d5" for a Rail [Ar] | 4s | 3d⁵. */
 export function railText(rail: readonly Chip[]): string {
 	const core = rail.find((c) => c.kind === 'core');
-	const subshells = rail.filter((c) => c.kind === 'subshell').map(({ n, l, occupancy }) => ({ n, l, occupancy }));
-	return [core?.key ?? '', formatConfiguration(subshells)].filter((s) => s.length > 0).join(' ');
+	const subshells = rail.filter((c) => c.kind === 'subshell').map(({ n, l, occupancy }) => subshellLabel({ n, l, occupancy }));
+	return [core?.key ?? '', ...subshells].filter((s) => s.length > 0).join(' ');
+}
+
+/** Where a chip's subshell is written in the text ("4s" in "3d5 4s" is at 4; not inside "14s"). */
+function positionIn(text: string, chip: Chip): number {
+	if (chip.kind === 'core') return -1;
+	const m = new RegExp(`(?<!\\d)${chip.key}`, 'u').exec(text);
+	return m ? m.index : Number.MAX_SAFE_INTEGER;
+}
+
+/** The Rail in the order the subshells are written in the text (core first). */
+export function inTextOrder(rail: readonly Chip[], text: string): Chip[] {
+	return rail
+		.map((c, i) => ({ c, i, at: positionIn(text, c) }))
+		.sort((a, b) => a.at - b.at || a.i - b.i)
+		.map((x) => x.c);
 }
 
 /** The chips that show a parsed configuration: its core (if written) and the subshells outside it. */
@@ -78,7 +94,7 @@ export class BuilderState {
 	setText(text: string) {
 		this.text = text;
 		const { cfg } = checkNotation(text);
-		if (cfg) this.rail = reconcile(this.rail, cfg);
+		if (cfg) this.rail = inTextOrder(reconcile(this.rail, cfg), text);
 		else if (text.trim() === '') this.rail = [];
 	}
 

@@ -96,6 +96,13 @@ const bridge: ComputeTask<{ config: string; zeta?: string }> = {
 	light: ({ config }) => fewMicrostates(config),
 	run: ({ config, zeta }): ApiResponses['GET /api/v1/bridge'] => {
 		const cfg = parseConfiguration(config);
+		// Say what the user can do instead, in words of the app (not the engine's function names).
+		let levels = 0;
+		for (const n of jjLevelCountsByJ(cfg).values()) levels += n;
+		if (levels > MAX_JJ_LEVELS)
+			throw new RangeError(
+				`${formatConfiguration(cfg)} has ${levels} levels, more than the ${MAX_JJ_LEVELS} the Coupling bridge can join one by one. The Term sheet still gives its terms and the number of levels of each J, and the jj levels can be counted by J (GET /api/v1/jj?counts=only); or bridge a smaller configuration, e.g. with fewer open subshells.`
+			);
 		const b = couplingBridge(cfg, parseZetaList(zeta ?? ''));
 		return {
 			configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },

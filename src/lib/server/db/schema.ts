@@ -84,7 +84,8 @@ export const shelfEntries = sqliteTable(
 		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
 		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
 	},
-	(t) => [index('shelf_project_idx').on(t.projectId)]
+	// The Shelf list filters on the project and pages by (updated_at, id), newest first.
+	(t) => [index('shelf_project_updated_idx').on(t.projectId, t.updatedAt, t.id)]
 );
 
 /**
@@ -101,15 +102,31 @@ export const levelAnnotations = sqliteTable(
 		levelKey: text('level_key').notNull(),
 		/** Observed energy in cm⁻¹ above the ground level. */
 		observedEnergy: real('observed_energy'),
+		/** The observed energy's digits as typed ("1880", "19500.12345", "-12400"); shown and exported as is. */
+		observedEnergyText: text('observed_energy_text'),
 		/** One-sigma uncertainty of the observed energy, cm⁻¹. */
 		uncertainty: real('uncertainty'),
+		uncertaintyText: text('uncertainty_text'),
+		/**
+		 * True when the entry's configuration changed after the note was written: the note keeps its
+		 * old level key and waits to be reattached to a level of the new configuration, or deleted.
+		 */
+		detached: integer('detached', { mode: 'boolean' }).notNull().default(false),
+		/** The configuration (as typed) the note was written for, when detached. */
+		detachedFrom: text('detached_from'),
 		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull().default('proposed'),
 		comment: text('comment').notNull().default(''),
 		version: integer('version').notNull().default(1),
 		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
 		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
 	},
-	(t) => [uniqueIndex('annotation_entry_level_idx').on(t.entryId, t.levelKey)]
+	// One attached note per level; detached notes may share a key with a note of the new configuration.
+	(t) => [
+		uniqueIndex('annotation_entry_level_idx')
+			.on(t.entryId, t.levelKey)
+			.where(sql`${t.detached} = 0`),
+		index('annotation_entry_idx').on(t.entryId, t.detached)
+	]
 );
 
 /** Mail that the app "sent": the local outbox used in development, demos and tests. */

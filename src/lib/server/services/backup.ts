@@ -76,7 +76,13 @@ const text = (max: number) => z.string().max(max, `must be at most ${max} charac
 const noteSchema = z.strictObject({
 	levelKey: text(80),
 	observedEnergy: z.number().finite().nullable(),
+	/** The digits as typed; files written before they were kept have none. */
+	observedEnergyText: text(40).nullable().default(null),
 	uncertainty: z.number().finite().nonnegative().nullable(),
+	uncertaintyText: text(40).nullable().default(null),
+	/** A note detached by a configuration change, and the configuration it was written for. */
+	detached: z.boolean().default(false),
+	detachedFrom: text(200).nullable().default(null),
 	status: z.enum(ASSIGNMENT_STATUSES),
 	comment: text(10000),
 	version: z.number().int().positive(),

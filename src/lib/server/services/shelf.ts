@@ -2,16 +2,18 @@
  * The Shelf: a project's saved configurations. Viewers read, editors write.
  * Updates carry the version the editor last read; a stale version is refused (409).
  */
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, lt, or, sql } from 'drizzle-orm';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { db } from '../db';
-import { shelfEntries, users } from '../db/schema';
+import { levelAnnotations, shelfEntries, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
-import { parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
+import { pageSchema, parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
 import { changedFields, logActivity } from './activity';
 import { ConfigurationError, parseConfiguration } from '../../physics/parse';
-import { parseSpecies } from '../../physics/elements';
+import { parseSpecies, type Species } from '../../physics/elements';
+import { checkElectrons, sameConfiguration } from '../../physics/implied';
 import { BudgetError, checkTermSheetBudget, MAX_ENTRY_LEVELS } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
 import { levelTotal } from '../../physics/terms';
@@ -70,19 +72,123 @@ export function readEntry(projectId: string, entryId: string) {
 	return row;
 }
 
-export function listEntries(actor: Actor, projectId: string) {
-	projectAccess(actor, projectId, 'viewer');
+const speciesOrNull = (text: string): Species | null => {
+	if (!text) return null;
+	try {
+		return parseSpecies(text);
+	} catch {
+		return null;
+	}
+};
+
+/**
+ * Warnings about an entry that do not stop it being saved: the species and the configuration
+ * disagree on the number of electrons (counting the closed subshells the notation implies).
+ */
+export function entryWarnings(entry: { species: string; notation: string }): string[] {
+	const species = speciesOrNull(entry.species);
+	if (!species) return [];
+	try {
+		const warning = checkElectrons(species, parseConfiguration(entry.notation)).warning;
+		return warning ? [warning] : [];
+	} catch {
+		return [];
+	}
+}
+
+/**
+ * Whether changing an entry from `before` to `after` keeps its configuration: the notations
+ * are compared as parsed configurations with their implied closed subshells (physics/implied.ts),
+ * not as typed text, so "2p2" → "[He] 2s2 2p2" keeps the levels and "2p2" → "2p4" does not.
+ */
+export function keepsConfiguration(before: { species: string; notation: string }, after: { species: string; notation: string }): boolean {
+	if (before.notation === after.notation) return true;
+	let next;
+	try {
+		next = parseConfiguration(after.notation);
+	} catch {
+		return true; // not a configuration: the edit is refused by checkNotation, and nothing is detached
+	}
+	try {
+		return sameConfiguration(parseConfiguration(before.notation), next, speciesOrNull(before.species), speciesOrNull(after.species));
+	} catch {
+		return false;
+	}
+}
+
+/** The notes of an entry that are attached to a level (and so would be detached by a configuration change). */
+function attachedNoteCount(entryId: string): number {
 	return db
+		.select({ n: sql<number>`count(*)` })
+		.from(levelAnnotations)
+		.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.detached, false)))
+		.get()!.n;
+}
+
+/**
+ * How many notes a change of configuration would detach (0 when the configuration stays the same),
+ * so that a page can ask before saving. Viewers may ask; only editors can save.
+ */
+export function notesDetachedBy(actor: Actor, projectId: string, entryId: string, change: { notation: string; species?: string }): number {
+	projectAccess(actor, projectId, 'viewer');
+	const current = readEntry(projectId, entryId);
+	const after = { notation: change.notation, species: change.species ?? current.species };
+	return keepsConfiguration(current, after) ? 0 : attachedNoteCount(entryId);
+}
+
+const encodeCursor = (updatedAt: Date, id: string) => Buffer.from(`${updatedAt.getTime()}:${id}`).toString('base64url');
+
+function decodeCursor(cursor: string): { t: Date; id: string } {
+	const text = Buffer.from(cursor, 'base64url').toString('utf8');
+	const m = /^(\d{1,16}):([A-Za-z0-9_-]{1,64})$/.exec(text);
+	if (!m) throw badRequest('cursor is not one this server gave out: send the nextCursor of the previous page', { field: 'cursor' });
+	return { t: new Date(Number(m[1])), id: m[2] };
+}
+
+/** `column` contains `q` (case-insensitive for ASCII, as SQLite's LIKE), with % and _ taken literally. */
+const contains = (column: SQLiteColumn, q: string) => sql`${column} like ${`%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`} escape '\\'`;
+
+/**
+ * One page of the Shelf, newest change first: `limit` entries (1 … 200, default 50) after `cursor`
+ * (the `nextCursor` of the page before), optionally only those whose title, species, notation or
+ * tags contain `q`. `nextCursor` is null on the last page.
+ */
+export function listEntries(actor: Actor, projectId: string, query: unknown = {}) {
+	projectAccess(actor, projectId, 'viewer');
+	const { limit, cursor, q } = parseInput(pageSchema, query);
+	const after = cursor ? decodeCursor(cursor) : null;
+
+	const rows = db
 		.select(entryColumns)
 		.from(shelfEntries)
-		.where(eq(shelfEntries.projectId, projectId))
-		.orderBy(desc(shelfEntries.updatedAt))
+		.where(
+			and(
+				eq(shelfEntries.projectId, projectId),
+				after
+					? or(lt(shelfEntries.updatedAt, after.t), and(eq(shelfEntries.updatedAt, after.t), lt(shelfEntries.id, after.id)))
+					: undefined,
+				q
+					? or(
+							contains(shelfEntries.title, q),
+							contains(shelfEntries.species, q),
+							contains(shelfEntries.notation, q),
+							contains(shelfEntries.tags, q)
+						)
+					: undefined
+			)
+		)
+		.orderBy(desc(shelfEntries.updatedAt), desc(shelfEntries.id))
+		.limit(limit + 1)
 		.all();
+	const page = rows.slice(0, limit);
+	const last = page[page.length - 1];
+	return { entries: page, nextCursor: rows.length > limit && last ? encodeCursor(last.updatedAt, last.id) : null };
 }
 
 export function getEntry(actor: Actor, projectId: string, entryId: string) {
 	projectAccess(actor, projectId, 'viewer');
-	return readEntry(projectId, entryId);
+	const entry = readEntry(projectId, entryId);
+	return { ...entry, warnings: entryWarnings(entry) };
 }
 
 export function createEntry(actor: Actor, projectId: string, input: unknown) {
@@ -103,7 +209,8 @@ export function createEntry(actor: Actor, projectId: string, input: unknown) {
 			subject: `entry:${id}`
 		});
 	});
-	return readEntry(projectId, id);
+	const entry = readEntry(projectId, id);
+	return { ...entry, warnings: entryWarnings(entry) };
 }
 
 export function updateEntry(actor: Actor, projectId: string, entryId: string, input: unknown) {
@@ -118,6 +225,16 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 				`This entry was changed by ${current.updatedBy ?? 'someone'} since you opened it (you had version ${version}, it is now ${current.version}); reload to see their change, then edit again`,
 				{ currentVersion: current.version }
 			);
+		// A different configuration: every attached note is kept but detached until someone
+		// reattaches it to a level of the new configuration or deletes it (never hidden or moved).
+		const after = { notation: data.notation ?? current.notation, species: data.species ?? current.species };
+		const detachedNotes = keepsConfiguration(current, after)
+			? 0
+			: db
+					.update(levelAnnotations)
+					.set({ detached: true, detachedFrom: current.notation })
+					.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.detached, false)))
+					.run().changes;
 		db.update(shelfEntries)
 			.set({ ...data, version: version + 1, updatedBy: actor.id, updatedAt: new Date() })
 			.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.version, version)))
@@ -129,7 +246,8 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”`,
 			subject: `entry:${entryId}`
 		});
-		return readEntry(projectId, entryId);
+		const entry = readEntry(projectId, entryId);
+		return { ...entry, warnings: entryWarnings(entry), detachedNotes };
 	});
 }
 

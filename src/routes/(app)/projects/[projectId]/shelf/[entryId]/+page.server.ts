@@ -1,7 +1,7 @@
-import { redirect } from '@sveltejs/kit';
+import { fail, redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { deleteEntry, updateEntry } from '$lib/server/services/shelf';
-import { annotatedLevels, saveAnnotation } from '$lib/server/services/annotations';
+import { deleteEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
+import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { shelfFieldsFrom } from '$lib/server/forms';
 
@@ -12,13 +12,8 @@ export const load: PageServerLoad = (event) => {
 	return forPage(() => annotatedLevels(user, projectId, entryId));
 };
 
-/** '' → null; anything else must read as a number (zod then says what is allowed). */
-const optionalNumber = (v: FormDataEntryValue | null) => {
-	const text = String(v ?? '')
-		.trim()
-		.replace(',', '.');
-	return text === '' ? null : Number(text);
-};
+/** The text as typed; the one energy reader (energyText.ts, through the schema) decides what it means. */
+const typed = (v: FormDataEntryValue | null) => String(v ?? '');
 
 export const actions: Actions = {
 	update: async (event) => {
@@ -26,10 +21,19 @@ export const actions: Actions = {
 		const form = await event.request.formData();
 		const values = shelfFieldsFrom(form);
 		const version = Number(form.get('version'));
-		const result = await forAction(() => updateEntry(user, event.params.projectId, event.params.entryId, { ...values, version }), {
-			values
-		});
-		return result.ok ? { saved: true } : result.failure;
+		const { projectId, entryId } = event.params;
+		// Ask before a configuration change detaches notes: the form comes back with the count to confirm.
+		const count = await forAction(() => notesDetachedBy(user, projectId, entryId, values));
+		if (!count.ok) return count.failure;
+		if (count.value > 0 && String(form.get('confirmDetach') ?? '') !== String(count.value))
+			return fail(409, {
+				message: `Changing the configuration to ${values.notation} detaches ${count.value} note${count.value === 1 ? '' : 's'} from ${count.value === 1 ? 'its level' : 'their levels'}: they are kept and listed apart until you reattach them to a level of the new configuration or delete them. Save again to confirm.`,
+				field: 'notation',
+				confirmDetach: count.value,
+				values
+			});
+		const result = await forAction(() => updateEntry(user, projectId, entryId, { ...values, version }), { values });
+		return result.ok ? { saved: true, detachedNotes: result.value.detachedNotes } : result.failure;
 	},
 	annotate: async (event) => {
 		const user = requireUser(event);
@@ -38,14 +42,38 @@ export const actions: Actions = {
 		const versionText = String(form.get('version') ?? '');
 		const input = {
 			levelKey,
-			observedEnergy: optionalNumber(form.get('observedEnergy')),
-			uncertainty: optionalNumber(form.get('uncertainty')),
+			observedEnergy: typed(form.get('observedEnergy')),
+			uncertainty: typed(form.get('uncertainty')),
 			status: String(form.get('status') ?? 'proposed'),
 			comment: String(form.get('comment') ?? ''),
 			...(versionText ? { version: Number(versionText) } : {})
 		};
-		const result = await forAction(() => saveAnnotation(user, event.params.projectId, event.params.entryId, input), { levelKey });
+		const result = await forAction(() => saveAnnotation(user, event.params.projectId, event.params.entryId, input), {
+			levelKey,
+			typed: { observedEnergy: input.observedEnergy, uncertainty: input.uncertainty, comment: input.comment }
+		});
 		return result.ok ? { annotated: levelKey } : result.failure;
+	},
+	/** Deletes one note (attached or detached) by id. */
+	deleteNote: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const annotationId = String(form.get('annotationId') ?? '');
+		const result = await forAction(() => deleteAnnotationById(user, event.params.projectId, event.params.entryId, annotationId), {
+			noteId: annotationId
+		});
+		return result.ok ? { noteDeleted: true } : result.failure;
+	},
+	/** Attaches a detached note to a level of the present configuration. */
+	reattach: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const annotationId = String(form.get('annotationId') ?? '');
+		const input = { levelKey: String(form.get('levelKey') ?? ''), version: Number(form.get('version')) };
+		const result = await forAction(() => reattachAnnotation(user, event.params.projectId, event.params.entryId, annotationId, input), {
+			noteId: annotationId
+		});
+		return result.ok ? { reattached: input.levelKey } : result.failure;
 	},
 	delete: async (event) => {
 		const user = requireUser(event);

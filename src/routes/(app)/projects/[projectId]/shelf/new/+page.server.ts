@@ -9,9 +9,11 @@ export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
 	forPage(() => projectAccess(user, event.params.projectId, 'editor'));
 	const q = event.url.searchParams;
-	return {
-		prefill: { title: q.get('title') ?? '', species: q.get('species') ?? '', notation: q.get('config') ?? '', notes: '', tags: [] }
-	};
+	const species = (q.get('species') ?? '').trim();
+	const notation = (q.get('config') ?? '').trim();
+	// "Save to Shelf" from the Builder: a title from the species and configuration, to edit or keep.
+	const title = q.get('title') ?? [species, notation].filter(Boolean).join(' ').slice(0, 160);
+	return { prefill: { title, species, notation, notes: '', tags: [] } };
 };
 
 export const actions: Actions = {

@@ -2,8 +2,12 @@ import type { RequestHandler } from './$types';
 import { createEntry, listEntries } from '$lib/server/services/shelf';
 import { api, apiActor, readJson, reply } from '$lib/server/http';
 
+/** One page of the Shelf: `?limit=1…200` (default 50), `&cursor=` the `nextCursor` of the page before, `&q=` filter text. */
 export const GET: RequestHandler = api((event) =>
-	reply('GET /api/v1/projects/:projectId/shelf', { entries: listEntries(apiActor(event), event.params.projectId) })
+	reply(
+		'GET /api/v1/projects/:projectId/shelf',
+		listEntries(apiActor(event), event.params.projectId, Object.fromEntries(event.url.searchParams))
+	)
 );
 
 export const POST: RequestHandler = api(async (event) => {

@@ -8,12 +8,14 @@ export const GET: RequestHandler = api((event) =>
 	})
 );
 
-/** Body: the fields to change plus `version`, the version you last read (stale versions get 409). */
+/**
+ * Body: only the fields to change plus `version`, the version you last read (stale versions get 409).
+ * A new configuration detaches the entry's notes (`detachedNotes` says how many).
+ */
 export const PATCH: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return reply('PATCH /api/v1/projects/:projectId/shelf/:entryId', {
-		entry: updateEntry(actor, event.params.projectId, event.params.entryId, await readJson(event))
-	});
+	const { detachedNotes, ...entry } = updateEntry(actor, event.params.projectId, event.params.entryId, await readJson(event));
+	return reply('PATCH /api/v1/projects/:projectId/shelf/:entryId', { entry, detachedNotes });
 });
 
 export const DELETE: RequestHandler = api((event) => {
