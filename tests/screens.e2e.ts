@@ -22,7 +22,7 @@ test('Builder: g in g_s, true minus signs, the Hund caution once in full, Level 
 	await expect(page.getByTestId('hund-note').or(page.getByTestId('hund-caution'))).toBeVisible();
 	await page.getByText('free electron').click();
 	// ²P₃/₂: g_J = 2/3 + 1/3 g_s; with g_s = 2.00231930436 the decimal is 1.334106 (rounded).
-	const p32 = page.locator('[data-testid="term-sheet"] tr[data-level="2P|3/2"]');
+	const p32 = page.locator('[data-testid="term-sheet"] tr[data-level="2P#1|3/2"]');
 	await expect(p32.getByTestId('g-gs-form')).toHaveText('2/3 + 1/3gs');
 	await expect(p32).toContainText('1.334106');
 	await expect(p32).not.toContainText('4/3');

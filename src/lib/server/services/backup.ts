@@ -331,7 +331,11 @@ export function importProject(actor: Actor, fileText: string): ImportReport {
 		tx.insert(projects)
 			.values({ id: projectId, ...file.project, createdBy: ctx.userIdOf(file.project.createdBy) })
 			.run();
-		tx.insert(memberships).values({ projectId, userId: actor.id, role: 'owner' }).run();
+		// The importer owns the copy; when the file lists them too, their membership keeps its date.
+		const ownSince = file.members.find((m) => ctx.userIdOf(m.email) === actor.id)?.since;
+		tx.insert(memberships)
+			.values({ projectId, userId: actor.id, role: 'owner', ...(ownSince ? { createdAt: ownSince } : {}) })
+			.run();
 		for (const m of file.members) {
 			const userId = ctx.userIdOf(m.email);
 			if (userId === actor.id) continue;
