@@ -7,6 +7,7 @@
  * dropped, and a background rectangle in the current paper colour is put underneath.
  * PNG: the serialized SVG drawn into a canvas at 2× and saved with `toBlob`.
  */
+import { saveFile } from '$lib/client/saveFile';
 
 /** Presentation properties copied from the computed style onto the exported copy. */
 const STYLE_PROPERTIES = [
@@ -96,21 +97,9 @@ export function serializeSvg(svg: SVGSVGElement): string {
 	return new XMLSerializer().serializeToString(copy);
 }
 
-function save(blob: Blob, filename: string) {
-	const url = URL.createObjectURL(blob);
-	const a = document.createElement('a');
-	a.href = url;
-	a.download = filename;
-	a.rel = 'noopener';
-	document.body.appendChild(a);
-	a.click();
-	a.remove();
-	setTimeout(() => URL.revokeObjectURL(url), 10_000);
-}
-
 /** Saves the picture as an SVG file. */
 export function downloadSvg(svg: SVGSVGElement, filename: string): void {
-	save(new Blob([serializeSvg(svg)], { type: 'image/svg+xml;charset=utf-8' }), filename);
+	saveFile(new Blob([serializeSvg(svg)], { type: 'image/svg+xml;charset=utf-8' }), filename);
 }
 
 /** Saves the picture as a PNG file at twice its CSS pixel size. */
@@ -131,7 +120,7 @@ export async function downloadPng(svg: SVGSVGElement, filename: string, scale = 
 		ctx.drawImage(img, 0, 0, width, height);
 		const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, 'image/png'));
 		if (!blob) throw new Error('The picture is too large to save as PNG; save it as SVG instead');
-		save(blob, filename);
+		saveFile(blob, filename);
 	} finally {
 		URL.revokeObjectURL(url);
 	}
