@@ -202,6 +202,19 @@ export type EnergiesResponse = IcResult & { limits: EnergyLimits };
 export type EnergySweepResponse = SweepResult & { limits: EnergyLimits };
 export type FitResponse = FitResult & { limits: EnergyLimits };
 
+/** What restoring a project backup reports (the Projects page's restore form shows it). */
+export interface ImportReport {
+	projectId: string;
+	name: string;
+	entries: number;
+	levelNotes: number;
+	activity: number;
+	/** Members restored with their role (the importer is owner). */
+	members: { email: string; role: string }[];
+	/** Members of the file that have no account here, by e-mail, with the role they had. */
+	notRestored: { email: string; name: string; role: string }[];
+}
+
 /**
  * The response body of each route, keyed "METHOD /path" exactly as in `API_ROUTES` (./routes).
  * Routes that answer 204 or a file map to `null`.

@@ -3,7 +3,8 @@
  */
 import type { Actor } from './access';
 import { ServiceError } from './errors';
-import { BACKUP_MAX_BYTES, importProject, type ImportReport } from './services/backup';
+import { BACKUP_MAX_BYTES, importProject } from './services/backup';
+import type { ImportReport } from '../api/types';
 
 export type RestoreOutcome = { ok: true; report: ImportReport } | { ok: false; status: number; message: string };
 

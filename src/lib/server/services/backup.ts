@@ -19,6 +19,7 @@
  * restored with records missing. Adding a section does not change the format version; changing
  * the shape of an existing part does (bump BACKUP_VERSION and keep reading the older versions).
  */
+import type { ImportReport } from '../../api/types';
 import { asc, eq, inArray, sql } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
@@ -301,18 +302,6 @@ export function parseBackup(fileText: string): z.output<typeof backupSchema> {
 			`The backup holds records ("${unknownSection}") that this server cannot restore; update Termwright here, then import it. Nothing was imported.`
 		);
 	return result.data;
-}
-
-export interface ImportReport {
-	projectId: string;
-	name: string;
-	entries: number;
-	levelNotes: number;
-	activity: number;
-	/** Members restored with their role (the importer is owner). */
-	members: { email: string; role: string }[];
-	/** Members of the file that have no account here, by e-mail, with the role they had. */
-	notRestored: { email: string; name: string; role: string }[];
 }
 
 /**
