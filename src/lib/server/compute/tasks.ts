@@ -7,10 +7,12 @@
  * request thread. Engine errors that mean bad input (InputError such as ConfigurationError,
  * RangeError, including the engine's BudgetError) become a 400 in the API's error shape.
  *
- * This module may import only the engine and plain packages: it is bundled for the worker
+ * This module may import only the engine, plain packages and dependency-free modules such as
+ * ../recent: it is bundled for the worker
  * (scripts/build-worker.js) without SvelteKit.
  */
 import type { ApiResponses } from '../../api/types';
+import { RecentMap } from '../recent';
 import { termSheet } from '../../physics/report';
 import { formatConfiguration, parseConfiguration, openSubshells } from '../../physics/parse';
 import { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from '../../physics/jj';
@@ -174,14 +176,12 @@ export type TaskName = keyof typeof TASKS;
 export type TaskArgs<N extends TaskName> = Parameters<(typeof TASKS)[N]['run']>[0];
 
 /** Recent answers (the engine is pure, so an answer never goes stale): at most CACHE_ENTRIES, small bodies only. */
-const answers = new Map<string, string>();
 const CACHE_ENTRIES = 500;
 const CACHE_BODY_CHARS = 200_000;
+const answers = new RecentMap<string>(CACHE_ENTRIES);
 
 function remember(key: string, body: string): void {
-	if (body.length > CACHE_BODY_CHARS) return;
-	answers.set(key, body);
-	if (answers.size > CACHE_ENTRIES) answers.delete(answers.keys().next().value!);
+	if (body.length <= CACHE_BODY_CHARS) answers.set(key, body);
 }
 
 /** The API's error body (`{ "error": { "message", … } }`) as text. */
@@ -198,11 +198,7 @@ export function runTask<N extends TaskName>(name: N, args: TaskArgs<N>): TaskRes
 	if (!task) return { status: 400, body: errorBody(`unknown compute task "${String(name)}"`) };
 	const key = `${String(name)} ${JSON.stringify(args)}`;
 	const hit = answers.get(key);
-	if (hit !== undefined) {
-		answers.delete(key); // most recently used last
-		answers.set(key, hit);
-		return { status: 200, body: hit };
-	}
+	if (hit !== undefined) return { status: 200, body: hit };
 	try {
 		const body = JSON.stringify(task.run(args));
 		remember(key, body);

@@ -11,6 +11,7 @@ import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { entryWarnings, readEntry } from './shelf';
 import { logActivity, noteSummary } from './activity';
 import { newId } from '../ids';
+import { RecentMap } from '../recent';
 import { annotationInputSchema, parseInput, reattachSchema } from '../validation';
 import { parseConfiguration } from '../../physics/parse';
 import { termSheet, type TermSheet } from '../../physics/report';
@@ -54,10 +55,19 @@ function withTexts<R extends AnnotationRow>(a: R): R & { observedEnergyText: str
  * The Term sheet and level list of a stored entry. An entry saved before the engine's budgets
  * existed may be over them: that is answered with a clear 422 instead of running the computation.
  */
-function entryLevels(entry: { notation: string }): { sheet: TermSheet; refs: ReturnType<typeof levelRefs> } {
+type EntryLevels = { sheet: TermSheet; refs: ReturnType<typeof levelRefs> };
+
+/** Term sheets of recently opened entries: every page view, note save and export of an entry needs one. */
+const recentSheets = new RecentMap<EntryLevels>(64);
+
+function entryLevels(entry: { notation: string }): EntryLevels {
+	const hit = recentSheets.get(entry.notation);
+	if (hit) return hit;
 	try {
 		const sheet = termSheet(parseConfiguration(entry.notation));
-		return { sheet, refs: levelRefs(sheet.terms) };
+		const levels = { sheet, refs: levelRefs(sheet.terms) };
+		recentSheets.set(entry.notation, levels);
+		return levels;
 	} catch (e) {
 		if (e instanceof BudgetError)
 			throw new ServiceError(
