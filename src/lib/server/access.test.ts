@@ -19,16 +19,7 @@ import {
 	updateProject
 } from './services/projects';
 import { createEntry, getEntry, listEntries, updateEntry, deleteEntry } from './services/shelf';
-
-function statusOf(call: () => unknown): number | 'ok' {
-	try {
-		call();
-		return 'ok';
-	} catch (e) {
-		if (e instanceof ServiceError) return e.status;
-		throw e;
-	}
-}
+import { statusOf } from './status-of';
 
 let owner: Actor, editor: Actor, viewer: Actor, stranger: Actor;
 let projectId: string;

@@ -4,7 +4,6 @@
  * the product's rules (common practice, no source).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ServiceError } from './errors';
 import type { Actor } from './access';
 import { sqlite } from './db';
 import { signUp } from './services/users';
@@ -12,18 +11,9 @@ import { addMember, changeMemberRole, createProject, leaveProject, removeMember,
 import { createEntry, deleteEntry, listEntries, updateEntry } from './services/shelf';
 import { deleteAnnotation, saveAnnotation } from './services/annotations';
 import { activityActors, changedFields, listActivity } from './services/activity';
+import { statusOf } from './status-of';
 
 let owner: Actor, editor: Actor, viewer: Actor, stranger: Actor, projectId: string;
-
-const statusOf = (call: () => unknown) => {
-	try {
-		call();
-		return 'ok';
-	} catch (e) {
-		if (e instanceof ServiceError) return e.status;
-		throw e;
-	}
-};
 
 /** All log lines of the project, newest first. */
 const log = () => listActivity(owner, projectId, { limit: 200 }).items;

@@ -3,13 +3,13 @@
  * (product rules, common practice, no source).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ServiceError } from './errors';
 import type { Actor } from './access';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
 import { createEntry } from './services/shelf';
 import { annotatedLevels, saveAnnotation } from './services/annotations';
 import { exportAnnotatedLevels } from './services/exports';
+import { statusOf } from './status-of';
 
 let editor: Actor, viewer: Actor, projectId: string, entryId: string;
 
@@ -20,15 +20,6 @@ beforeAll(async () => {
 	addMember(editor, projectId, { email: 'vi@example.org', role: 'viewer' });
 	entryId = createEntry(editor, projectId, { title: 'O III ground', species: 'O III', notation: '1s2 2s2 2p2' }).id;
 });
-
-const status = (call: () => unknown) => {
-	try {
-		call();
-		return 'ok';
-	} catch (e) {
-		return (e as ServiceError).status;
-	}
-};
 
 describe('level annotations', () => {
 	it('lists the 5 levels of 2p² (³P₀,₁,₂ ¹D₂ ¹S₀) with no notes yet', () => {
@@ -51,13 +42,13 @@ describe('level annotations', () => {
 
 	it('a stale version is refused and nothing changes', () => {
 		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 112, status: 'confirmed', version: 1 });
-		expect(status(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 999, version: 1 }))).toBe(409);
+		expect(statusOf(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 999, version: 1 }))).toBe(409);
 		const note = annotatedLevels(viewer, projectId, entryId).levels.find((l) => l.key === '3P#1|1')!.annotation!;
 		expect(note).toMatchObject({ observedEnergy: 112, status: 'confirmed', version: 2 });
 	});
 
 	it('a viewer cannot annotate; an unknown level or a bad number is a 400', () => {
-		expect(status(() => saveAnnotation(viewer, projectId, entryId, { levelKey: '3P#1|0', observedEnergy: 0 }))).toBe(403);
+		expect(statusOf(() => saveAnnotation(viewer, projectId, entryId, { levelKey: '3P#1|0', observedEnergy: 0 }))).toBe(403);
 		expect(() => saveAnnotation(editor, projectId, entryId, { levelKey: '2D#1|5/2' })).toThrow(/is not a level of/);
 		expect(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|0', observedEnergy: Number.NaN })).toThrow(/number in cm⁻¹/);
 		expect(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|0', uncertainty: -1 })).toThrow(/must not be negative/);

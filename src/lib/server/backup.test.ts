@@ -5,7 +5,6 @@
  * practice, no source); the data is invented.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ServiceError } from './errors';
 import type { Actor } from './access';
 import { sqlite } from './db';
 import { signUp } from './services/users';
@@ -13,18 +12,9 @@ import { addMember, createProject, listMembers, listProjects } from './services/
 import { createEntry, deleteEntry, updateEntry } from './services/shelf';
 import { saveAnnotation } from './services/annotations';
 import { BACKUP_VERSION, exportProject, importProject, parseBackup } from './services/backup';
+import { statusOf } from './status-of';
 
 let owner: Actor, editor: Actor, viewer: Actor, stranger: Actor, projectId: string;
-
-const statusOf = (call: () => unknown) => {
-	try {
-		call();
-		return 'ok';
-	} catch (e) {
-		if (e instanceof ServiceError) return e.status;
-		throw e;
-	}
-};
 
 type Row = Record<string, unknown>;
 const rows = (query: string, ...params: unknown[]) => sqlite.prepare(query).all(...params) as Row[];
