@@ -11,6 +11,7 @@ import { clearEnergyCache } from '../src/lib/physics/energy-structure';
 import { symmetricEigen } from '../src/lib/physics/symmetric-eigen';
 import { checkDeterminantBudget } from '../src/lib/physics/determinants';
 import { parseConfiguration } from '../src/lib/physics/parse';
+import type { SummaryRow } from './bench-summary';
 
 /** Targets from the issue (ms, median, cold): d⁵ < 50, f⁷ < 1000, 4f⁷ 5d < 20000. */
 const TARGETS: Record<string, number> = { '3d5': 50, '4f3': 1000, '4f7': 1000, '4f7 5d': 20000 };
@@ -54,7 +55,9 @@ const PARAMS: Record<string, Parameters<typeof intermediateLevels>[1]> = {
 	}
 };
 
-export function main(): void {
+/** Prints the detail and returns one summary row per configuration that was run (cold median). */
+export function main(): SummaryRow[] {
+	const rows: SummaryRow[] = [];
 	console.log(
 		'Energy solver: all levels with LS and jj compositions and g (medians; heap = largest heapUsed growth seen after a cold run)'
 	);
@@ -86,6 +89,12 @@ export function main(): void {
 			warm.push(performance.now() - t);
 		}
 		const c = median(cold);
+		rows.push({
+			bench: 'Energy solver (cold)',
+			case: `${cfg}: ${levels} levels`,
+			medianMs: c,
+			target: { text: `< ${TARGETS[cfg]} ms`, met: c < TARGETS[cfg] }
+		});
 		console.log(
 			`${cfg.padEnd(9)} ${String(budget.total).padStart(5)} ${String(budget.block).padStart(6)} ${String(levels).padStart(7)} ${c.toFixed(1).padStart(9)} ${median(warm).toFixed(1).padStart(9)} ${String(TARGETS[cfg]).padStart(10)} ${(c / TARGETS[cfg]).toFixed(2).padStart(6)} ${(peak / 2 ** 20).toFixed(1).padStart(13)}`
 		);
@@ -94,7 +103,7 @@ export function main(): void {
 	for (const n of [100, 327]) {
 		const a = new Float64Array(n * n);
 		for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) a[i * n + j] = a[j * n + i] = Math.sin(i * 7.1 + j * 3.3);
-		const rows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
+		const matrixRows = Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)));
 		const ours = median(
 			[0, 1, 2].map(() => {
 				const t = performance.now();
@@ -105,14 +114,26 @@ export function main(): void {
 		const theirs = median(
 			[0, 1, 2].map(() => {
 				const t = performance.now();
-				void new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).eigenvectorMatrix;
+				void new EigenvalueDecomposition(new Matrix(matrixRows), { assumeSymmetric: true }).eigenvectorMatrix;
 				return performance.now() - t;
 			})
 		);
+		rows.push({
+			bench: 'symmetric eigensolver',
+			case: `random ${n}×${n}`,
+			medianMs: ours,
+			naive: { method: 'ml-matrix EigenvalueDecomposition', medianMs: theirs }
+		});
 		console.log(
 			`n = ${String(n).padStart(4)}: ${ours.toFixed(1).padStart(8)} ms vs ml-matrix ${theirs.toFixed(1).padStart(8)} ms (ratio ${(theirs / ours).toFixed(1)}×)`
 		);
 	}
+	return rows;
+}
+
+/** For the summary of `npm run bench`. */
+export async function run(): Promise<SummaryRow[]> {
+	return main();
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) main();

@@ -11,6 +11,7 @@ import { pathToFileURL } from 'node:url';
 import { matchLines, matchLinesBruteForce, transitionTable, type MatchLevel, type ObservedLine } from '../src/lib/physics/matcher';
 import { vacuumToAir } from '../src/lib/physics/airvac';
 import type { TransitionType } from '../src/lib/physics/transitions';
+import type { SummaryRow } from './bench-summary';
 
 /** The full match of 10⁵ lines against 2 000 levels must take less than this (ms, median). */
 export const TARGET_MATCH_MS = 2000;
@@ -78,8 +79,8 @@ function timeMedian(run: () => unknown, runs: number): { wall: number; cpu: numb
 	return { wall: median(wall), cpu: median(cpu) };
 }
 
-/** Runs the benchmark and prints the figures and the verdict. */
-export function main(): void {
+/** Runs the benchmark, prints the figures and the verdict, and returns the summary rows (CPU medians). */
+export function main(): SummaryRow[] {
 	const rand = random(20260412);
 	const levels = inventLevels(rand);
 	const lines = inventLines(levels, rand);
@@ -131,6 +132,20 @@ export function main(): void {
 	);
 	const mem = process.memoryUsage();
 	console.log(`Heap used at the end: ${(mem.heapUsed / 2 ** 20).toFixed(1)} MB (RSS ${(mem.rss / 2 ** 20).toFixed(1)} MB)`);
+	return [
+		{
+			bench: 'Line matcher (CPU)',
+			case: `${n(LINES)} lines × ${n(LEVELS)} levels`,
+			medianMs: match.cpu,
+			naive: { method: 'brute force, scaled from a sample', medianMs: scaled(brute.cpu) },
+			target: { text: `< ${TARGET_MATCH_MS} ms`, met: match.cpu < TARGET_MATCH_MS }
+		}
+	];
+}
+
+/** For the summary of `npm run bench`. */
+export async function run(): Promise<SummaryRow[]> {
+	return main();
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) main();

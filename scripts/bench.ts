@@ -20,3 +20,8 @@ for (const [i, b] of BENCHES.entries()) {
 }
 console.log(`\n== Summary (Node ${process.version}; medians in ms; ratio = naive ÷ ours) ==`);
 printSummary(rows);
+// Peak resident memory of the whole run (ru_maxrss is in kB on Linux).
+const mem = process.memoryUsage();
+console.log(
+	`\nMemory: peak RSS ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB; at the end heap ${(mem.heapUsed / 2 ** 20).toFixed(0)} MB, RSS ${(mem.rss / 2 ** 20).toFixed(0)} MB`
+);
