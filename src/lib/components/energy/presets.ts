@@ -3,6 +3,8 @@
  * from; they are starting points for a fit, not results. "Typical magnitudes" fills any
  * configuration with round numbers of the usual size (common practice, no source).
  */
+import { slaterFromRacah } from '$lib/physics/slater-parameters';
+
 export interface ParameterPreset {
 	id: string;
 	name: string;
@@ -12,11 +14,8 @@ export interface ParameterPreset {
 	values: Record<string, number>;
 }
 
-/** F² and F⁴ of a d subshell from Racah's B and C: F² = 49B + 7C, F⁴ = 63C/5 (Racah 1942). */
-const fromRacah = (B: number, C: number) => ({ F2: 49 * B + 7 * C, F4: (63 * C) / 5 });
-
 const d = (shell: string, B: number, C: number, zeta: number) => {
-	const { F2, F4 } = fromRacah(B, C);
+	const { F2, F4 } = slaterFromRacah(B, C);
 	return { [`F2(${shell},${shell})`]: Math.round(F2), [`F4(${shell},${shell})`]: Math.round(F4), [`zeta(${shell})`]: zeta };
 };
 
