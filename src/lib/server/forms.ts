@@ -39,8 +39,7 @@ export function fieldsOf(form: FormData): FormFields {
 }
 
 /** Reads the Shelf entry fields from a submitted form. */
-export function shelfFieldsFrom(form: FormData | FormFields) {
-	const f = form instanceof FormData ? fieldsOf(form) : form;
+export function shelfFieldsFrom(f: FormFields) {
 	return {
 		title: f.text('title'),
 		species: f.text('species'),

@@ -5,12 +5,13 @@ import type { Actor } from './access';
 import { ServiceError } from './errors';
 import { BACKUP_MAX_BYTES, importProject } from './services/backup';
 import type { ImportReport } from '../api/types';
+import type { FormFields } from './forms';
 
 export type RestoreOutcome = { ok: true; report: ImportReport } | { ok: false; status: number; message: string };
 
-export async function restoreFromForm(actor: Actor, form: FormData): Promise<RestoreOutcome> {
-	const file = form.get('file');
-	if (!(file instanceof File) || file.size === 0)
+export async function restoreFromForm(actor: Actor, form: FormFields): Promise<RestoreOutcome> {
+	const file = form.file('file');
+	if (!file || file.size === 0)
 		return { ok: false, status: 400, message: 'Choose a backup file (a .json file made by “Download backup”) to restore' };
 	if (file.size > BACKUP_MAX_BYTES)
 		return { ok: false, status: 413, message: `The file is over ${BACKUP_MAX_BYTES / 1024 / 1024} MB; a project backup must be smaller` };

@@ -22,7 +22,7 @@ export const actions: Actions = {
 	/** A backup file (multipart upload) becomes a new project owned by the importer. */
 	restore: async (event) => {
 		const user = requireUser(event);
-		const outcome = await restoreFromForm(user, await event.request.formData());
+		const outcome = await restoreFromForm(user, await readForm(event.request));
 		return outcome.ok ? { restored: outcome.report } : fail(outcome.status, { restoreError: outcome.message });
 	}
 };

@@ -3,7 +3,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { deleteEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
 import { forAction, forPage, requireUser } from '$lib/server/http';
-import { shelfFieldsFrom } from '$lib/server/forms';
+import { readForm, shelfFieldsFrom } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -12,20 +12,17 @@ export const load: PageServerLoad = (event) => {
 	return forPage(() => annotatedLevels(user, projectId, entryId));
 };
 
-/** The text as typed; the one energy reader (energyText.ts, through the schema) decides what it means. */
-const typed = (v: FormDataEntryValue | null) => String(v ?? '');
-
 export const actions: Actions = {
 	update: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
+		const form = await readForm(event.request);
 		const values = shelfFieldsFrom(form);
-		const version = Number(form.get('version'));
+		const version = Number(form.text('version'));
 		const { projectId, entryId } = event.params;
 		// Ask before a configuration change detaches notes: the form comes back with the count to confirm.
 		const count = await forAction(() => notesDetachedBy(user, projectId, entryId, values));
 		if (!count.ok) return count.failure;
-		if (count.value > 0 && String(form.get('confirmDetach') ?? '') !== String(count.value))
+		if (count.value > 0 && form.text('confirmDetach') !== String(count.value))
 			return fail(409, {
 				message: `Changing the configuration to ${values.notation} detaches ${count.value} note${count.value === 1 ? '' : 's'} from ${count.value === 1 ? 'its level' : 'their levels'}: they are kept and listed apart until you reattach them to a level of the new configuration or delete them. Save again to confirm.`,
 				field: 'notation',
@@ -37,15 +34,16 @@ export const actions: Actions = {
 	},
 	annotate: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const levelKey = String(form.get('levelKey') ?? '');
-		const versionText = String(form.get('version') ?? '');
+		const form = await readForm(event.request);
+		const levelKey = form.text('levelKey');
+		const versionText = form.text('version');
+		// Energies go on as typed; the one energy reader (energyText.ts, through the schema) decides what they mean.
 		const input = {
 			levelKey,
-			observedEnergy: typed(form.get('observedEnergy')),
-			uncertainty: typed(form.get('uncertainty')),
-			status: String(form.get('status') ?? 'proposed'),
-			comment: String(form.get('comment') ?? ''),
+			observedEnergy: form.text('observedEnergy'),
+			uncertainty: form.text('uncertainty'),
+			status: form.text('status') || 'proposed',
+			comment: form.text('comment'),
 			...(versionText ? { version: Number(versionText) } : {})
 		};
 		const result = await forAction(() => saveAnnotation(user, event.params.projectId, event.params.entryId, input), {
@@ -57,8 +55,8 @@ export const actions: Actions = {
 	/** Deletes one note (attached or detached) by id. */
 	deleteNote: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const annotationId = String(form.get('annotationId') ?? '');
+		const form = await readForm(event.request);
+		const annotationId = form.text('annotationId');
 		const result = await forAction(() => deleteAnnotationById(user, event.params.projectId, event.params.entryId, annotationId), {
 			noteId: annotationId
 		});
@@ -67,9 +65,9 @@ export const actions: Actions = {
 	/** Attaches a detached note to a level of the present configuration. */
 	reattach: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
-		const annotationId = String(form.get('annotationId') ?? '');
-		const input = { levelKey: String(form.get('levelKey') ?? ''), version: Number(form.get('version')) };
+		const form = await readForm(event.request);
+		const annotationId = form.text('annotationId');
+		const input = { levelKey: form.text('levelKey'), version: Number(form.text('version')) };
 		const result = await forAction(() => reattachAnnotation(user, event.params.projectId, event.params.entryId, annotationId, input), {
 			noteId: annotationId
 		});

@@ -3,7 +3,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { projectAccess } from '$lib/server/access';
 import { createEntry } from '$lib/server/services/shelf';
 import { forAction, forPage, requireUser } from '$lib/server/http';
-import { shelfFieldsFrom } from '$lib/server/forms';
+import { readForm, shelfFieldsFrom } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
@@ -19,7 +19,7 @@ export const load: PageServerLoad = (event) => {
 export const actions: Actions = {
 	default: async (event) => {
 		const user = requireUser(event);
-		const values = shelfFieldsFrom(await event.request.formData());
+		const values = shelfFieldsFrom(await readForm(event.request));
 		const result = await forAction(() => createEntry(user, event.params.projectId, values), { values });
 		if (!result.ok) return result.failure;
 		redirect(303, `/projects/${event.params.projectId}/shelf/${result.value.id}`);
