@@ -103,6 +103,18 @@ test('from "Fe II" in the Builder to a saved, annotated and exported level table
 	// The title is prefilled from the species and the configuration.
 	await expect(page.getByLabel('Title')).toHaveValue('Fe II [Ar] 3d6 4s');
 	await page.getByLabel('Title').fill('Fe II ground configuration');
+	// A bad tag is refused with the message under the Tags field, which points to it; the rest is kept.
+	const tags = page.getByLabel('Tags (comma separated)');
+	await tags.fill('iron; nebula');
+	await page.getByRole('button', { name: 'Save to Shelf' }).click();
+	await expect(tags).toHaveAttribute('aria-invalid', 'true');
+	const tagError = page.locator(`[id="${await tags.getAttribute('aria-describedby')}"]`);
+	await expect(tagError).toContainText('A tag may hold letters, digits, spaces and . _ + - /');
+	await expect(page.getByRole('alert')).toHaveCount(1);
+	await expect(page.getByLabel('Title')).not.toHaveAttribute('aria-invalid');
+	await expect(page.getByLabel('Title')).toHaveValue('Fe II ground configuration');
+	await shot(page, 'shelf-new-tag-error');
+	await tags.fill('iron, nebula');
 	await page.getByRole('button', { name: 'Save to Shelf' }).click();
 	await expect(page.getByTestId('entry-title')).toHaveText('Fe II ground configuration');
 

@@ -23,6 +23,6 @@ export const actions: Actions = {
 	restore: async (event) => {
 		const user = requireUser(event);
 		const outcome = await restoreFromForm(user, await readForm(event.request));
-		return outcome.ok ? { restored: outcome.report } : fail(outcome.status, { restoreError: outcome.message });
+		return outcome.ok ? { restored: outcome.report } : fail(outcome.status, { form: 'restore', field: 'file', message: outcome.message });
 	}
 };

@@ -15,6 +15,7 @@ export const actions: Actions = {
 		const form = await readForm(event.request);
 		const email = form.text('email');
 		const result = await forAction(() => addMember(user, event.params.projectId, { email, role: form.text('role') }), {
+			form: 'add',
 			email
 		});
 		return result.ok ? { added: result.value.message } : result.failure;
