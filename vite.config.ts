@@ -25,7 +25,7 @@ export default defineConfig({
 				// Rune state classes (*.svelte.ts) tested with Svelte's client runtime, as the pages run them.
 				extends: true,
 				resolve: { conditions: ['browser'] },
-				test: { name: 'client', include: ['src/**/*.svelte.test.ts'], environment: 'node' }
+				test: { name: 'client', include: ['src/**/*.svelte.test.ts'], environment: './vitest.client-environment.ts' }
 			}
 		]
 	}

@@ -2,7 +2,7 @@
  * Typed calls to /api/v1 from the pages. The route key names the response type (./types), so no
  * page declares or casts an API body. Failures throw `ApiError` with the server's message.
  */
-import type { ApiErrorBody, ApiResponses, RouteKey } from './types';
+import type { ApiErrorBody, ApiRequests, ApiResponses, RouteKey } from './types';
 
 /** A refused or failed request: the server's message, and the token or field at fault when it names one. */
 export class ApiError extends Error {
@@ -18,8 +18,9 @@ export class ApiError extends Error {
 	}
 }
 
-type GetKey = Extract<RouteKey, `GET ${string}`>;
-type Params = Record<string, string | number | bigint | boolean | null | undefined>;
+export type GetKey = Extract<RouteKey, `GET ${string}`>;
+export type PostKey = keyof ApiRequests;
+export type Params = Record<string, string | number | bigint | boolean | null | undefined>;
 
 /**
  * The URL of a route: `:name` segments are filled from `params`, the other params become the query
@@ -49,14 +50,29 @@ export async function readApi<K extends RouteKey>(_route: K, res: Response): Pro
 	return body as ApiResponses[K];
 }
 
-/** GET a route. Network failures become ApiError status 0; an abort rethrows the AbortError. */
-export async function apiGet<K extends GetKey>(route: K, params: Params = {}, signal?: AbortSignal): Promise<ApiResponses[K]> {
+/** Sends one request. Network failures become ApiError status 0; an abort rethrows the AbortError. */
+async function send<K extends RouteKey>(route: K, url: string, init: RequestInit): Promise<ApiResponses[K]> {
 	let res: Response;
 	try {
-		res = await fetch(apiUrl(route, params), { signal });
+		res = await fetch(url, init);
 	} catch (e) {
 		if ((e as Error).name === 'AbortError') throw e;
 		throw new ApiError(0, 'Could not reach the server; check the connection and try again');
 	}
 	return readApi(route, res);
+}
+
+/** GET a route. */
+export function apiGet<K extends GetKey>(route: K, params: Params = {}, signal?: AbortSignal): Promise<ApiResponses[K]> {
+	return send(route, apiUrl(route, params), { signal });
+}
+
+/** POST a JSON body to a compute route; the body is typed by `ApiRequests`. */
+export function apiPost<K extends PostKey>(route: K, body: ApiRequests[K], signal?: AbortSignal): Promise<ApiResponses[K]> {
+	return send(route, apiUrl(route), {
+		method: 'POST',
+		headers: { 'content-type': 'application/json' },
+		body: JSON.stringify(body),
+		signal
+	});
 }

@@ -14,6 +14,7 @@ import type { FitResult } from '$lib/physics/fit';
 import type { FinderResult } from '$lib/physics/finder';
 import type { MatchResult, Tolerance } from '$lib/physics/matcher';
 import type { TransitionType } from '$lib/physics/transitions';
+import type { LevelInput, LineInput } from '$lib/lines/lists';
 
 /** Every failure: status 4xx/5xx with this body. */
 export interface ApiErrorBody {
@@ -213,6 +214,42 @@ export interface ImportReport {
 	members: { email: string; role: string }[];
 	/** Members of the file that have no account here, by e-mail, with the role they had. */
 	notRestored: { email: string; name: string; role: string }[];
+}
+
+// ---------------------------------------------------------------- request bodies of the compute POSTs
+
+/** Energy parameters in cm⁻¹ as the Energy solver routes take them (src/lib/server/energy-validation.ts). */
+export interface EnergyParametersBody {
+	Eav?: number;
+	F?: { k: number; a: string; b: string; value: number }[];
+	G?: { k: number; a: string; b: string; value: number }[];
+	zeta?: { shell: string; value: number }[];
+}
+
+/** One observed level for the fit: J, energy (cm⁻¹), uncertainty, and a term label or a rank within J. */
+export interface ObservedLevelBody {
+	J: string;
+	energy: number;
+	uncertainty?: number;
+	assign?: string | number;
+}
+
+/**
+ * The JSON body of each compute POST. Their answers depend only on the body, so the pages read them
+ * like GETs (`apiQuery` with `body`, cached by the body).
+ */
+export interface ApiRequests {
+	'POST /api/v1/energies': { config: string; parameters: EnergyParametersBody; gs?: GsChoice };
+	'POST /api/v1/energies/sweep': { config: string; parameters: EnergyParametersBody; points?: number };
+	'POST /api/v1/fit': { config: string; parameters: EnergyParametersBody; vary: string[]; observed: ObservedLevelBody[] };
+	'POST /api/v1/match': {
+		levels: LevelInput[];
+		lines: Omit<LineInput, 'intensity'>[];
+		types: string[];
+		coverage?: number;
+		tolerance?: number;
+		toleranceUnit?: 'cm-1' | 'mA';
+	};
 }
 
 /**
