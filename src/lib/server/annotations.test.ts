@@ -1,8 +1,9 @@
 /**
  * Level annotations: editors write, viewers read, stale versions and unknown levels are refused
- * (product rules, common practice, no source).
+ * (product rules, common practice, no source). Each test works on a Shelf entry of its own, so any
+ * one of them runs alone (`-t "<name>"`) and in any order.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Actor } from './access';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
@@ -18,8 +19,21 @@ beforeAll(async () => {
 	viewer = await signUp({ name: 'Vi Ewer', email: 'vi@example.org', password: 'long-enough-pw' });
 	projectId = createProject(editor, { name: 'P' }).id;
 	addMember(editor, projectId, { email: 'vi@example.org', role: 'viewer' });
+});
+
+beforeEach(() => {
 	entryId = createEntry(editor, projectId, { title: 'O III ground', species: 'O III', notation: '1s2 2s2 2p2' }).id;
 });
+
+/** An editor's first note on ³P₁ (version 1). */
+const firstNote = () =>
+	saveAnnotation(editor, projectId, entryId, {
+		levelKey: '3P#1|1',
+		observedEnergy: 111.1,
+		uncertainty: 0.2,
+		status: 'proposed',
+		comment: 'invented value'
+	});
 
 describe('level annotations', () => {
 	it('lists the 5 levels of 2p² (³P₀,₁,₂ ¹D₂ ¹S₀) with no notes yet', () => {
@@ -30,17 +44,15 @@ describe('level annotations', () => {
 	});
 
 	it('an editor records an observed energy; who and when are kept', () => {
-		const a = saveAnnotation(editor, projectId, entryId, {
-			levelKey: '3P#1|1',
-			observedEnergy: 111.1,
-			uncertainty: 0.2,
-			status: 'proposed',
-			comment: 'invented value'
-		});
+		const a = firstNote();
 		expect(a).toMatchObject({ observedEnergy: 111.1, uncertainty: 0.2, version: 1, updatedBy: 'Ed Itor' });
+		const kept = annotatedLevels(viewer, projectId, entryId).levels.find((l) => l.key === '3P#1|1')!.annotation!;
+		expect(kept).toMatchObject({ observedEnergy: 111.1, comment: 'invented value', version: 1, updatedBy: 'Ed Itor' });
+		expect(kept.updatedAt).toBeTruthy();
 	});
 
 	it('a stale version is refused and nothing changes', () => {
+		firstNote();
 		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 112, status: 'confirmed', version: 1 });
 		expect(statusOf(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 999, version: 1 }))).toBe(409);
 		const note = annotatedLevels(viewer, projectId, entryId).levels.find((l) => l.key === '3P#1|1')!.annotation!;
@@ -55,7 +67,10 @@ describe('level annotations', () => {
 	});
 
 	it('exports the annotated levels as CSV and LaTeX', () => {
+		firstNote();
+		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 112, status: 'confirmed', version: 1 });
 		const csv = exportAnnotatedLevels(viewer, projectId, entryId, 'csv').body;
+		// g(³P₁) = 3/2 (Landé formula, g_s = 2: 1 + (2 + 2 − 2)/(2·2)).
 		// The second save sent no uncertainty, so it is empty now (a save replaces the whole note).
 		expect(csv).toContain('3P J=1,3P,1,1,3/2,112,,confirmed,,Ed Itor,');
 		const tex = exportAnnotatedLevels(viewer, projectId, entryId, 'tex');
