@@ -74,7 +74,10 @@ const LISTED: Listed = {
 		summary: 'invite an e-mail address { email, role }: mails a one-time link valid 7 days; again for the same address replaces the link',
 		access: 'owner'
 	},
-	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': { summary: 'revoke an invitation: its link stops working', access: 'owner' },
+	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': {
+		summary: 'revoke an invitation: its link stops working',
+		access: 'owner'
+	},
 	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },
 	'DELETE /api/v1/projects/:projectId/membership': { summary: 'leave the project (not the last owner)', access: 'viewer' },
 	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf, a page at a time: ?limit=50&cursor=&q=', access: 'viewer' },

@@ -19,4 +19,7 @@ export const conflict = (message: string, details: Record<string, unknown> = {})
 /** 502: the mail server (or another service the app relies on) did not take what was handed to it. */
 // The transport's reason goes to the server log only: it names hosts and ports nobody outside needs.
 export const mailNotSent = (what: string) =>
-	new ServiceError(502, `${what} could not be sent: the mail server did not take it. Try again later, or tell the site admin (the server log says why).`);
+	new ServiceError(
+		502,
+		`${what} could not be sent: the mail server did not take it. Try again later, or tell the site admin (the server log says why).`
+	);

@@ -29,9 +29,7 @@ export function createToken(actor: Actor, name: unknown): { id: string; secret: 
 	const cleanName = parseInput(nameSchema, name);
 	const { secret, hash } = newSecret(24, TOKEN_PREFIX);
 	const id = newId();
-	db.insert(apiTokens)
-		.values({ id, userId: actor.id, name: cleanName, tokenHash: hash })
-		.run();
+	db.insert(apiTokens).values({ id, userId: actor.id, name: cleanName, tokenHash: hash }).run();
 	return { id, secret };
 }
 

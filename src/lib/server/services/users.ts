@@ -59,7 +59,9 @@ export function insertAccount(tx: Tx, account: PreparedAccount): Actor {
 		.from(users)
 		.get()!.n;
 	const siteRole = count === 0 ? 'admin' : 'member';
-	tx.insert(users).values({ ...account, siteRole }).run();
+	tx.insert(users)
+		.values({ ...account, siteRole })
+		.run();
 	return { id: account.id, email: account.email, name: account.name, siteRole };
 }
 
