@@ -15,7 +15,9 @@ export function startCatcherWithApp(isDev: boolean): Promise<MailCatcher | null>
 	const g = globalThis as WithCatcher;
 	g[KEY] ??= startMailCatcher({ port: mailCatcherPort(), store: keepCaughtMail }).then(
 		(catcher) => {
-			console.log(`Mail catcher on ${catcher.url}: the app's mail is caught there and shown to site admins at /admin/outbox`);
+			console.log(
+				`Mail catcher on ${catcher.url}: the app's mail is caught there (site admins read it at /admin/outbox when MAIL_OUTBOX=on)`
+			);
 			return catcher;
 		},
 		(e: Error) => {

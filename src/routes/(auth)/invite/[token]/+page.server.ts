@@ -28,7 +28,7 @@ export const actions: Actions = {
 	accept: async (event) => {
 		const result = await forAction(() => acceptInvitation(event.locals.user, event.params.token));
 		if (!result.ok) return result.failure;
-		redirect(303, `/projects/${result.value.projectId}?joined=1`);
+		redirect(303, `/projects/${result.value.projectId}`);
 	},
 	/** A new account for the invited address, and it joins; then signed in. */
 	signup: async (event) => {
@@ -38,6 +38,6 @@ export const actions: Actions = {
 		const result = await forAction(() => signUpByInvitation(event.params.token, { name, password: form.text('password') }), { name });
 		if (!result.ok) return result.failure;
 		await startSession(event.cookies, result.value.actor.id);
-		redirect(303, `/projects/${result.value.projectId}?joined=1`);
+		redirect(303, `/projects/${result.value.projectId}`);
 	}
 };
