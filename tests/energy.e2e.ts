@@ -92,3 +92,16 @@ test('Energy solver: LS → jj curves and a fit to three invented ³F levels', a
 	await expect(page.getByTestId('fit-error')).toContainText('needs at least as many observed levels as free parameters');
 	await shot(page, 'energy-solver-fit');
 });
+
+test('Energy solver: a literature set starts only the configuration it was derived for (3d³ does not start from V³⁺ 3d²)', async ({
+	page
+}) => {
+	// Common practice, no source: parameters fitted to one ion are not a default for another.
+	await page.goto('/builder?config=3d3');
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	await expect(page.locator('[data-testid="energy-levels"] tbody tr').first()).toBeVisible();
+	await expect(page.getByTestId('energy-preset')).toHaveValue('typical');
+	await page.goto('/builder?config=[Ar] 3d8');
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	await expect(page.getByTestId('energy-preset')).toHaveValue('ni2-3d8');
+});

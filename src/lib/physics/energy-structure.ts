@@ -7,6 +7,11 @@
  * basis |γ S L J⟩ is built (below), which splits the block into J subspaces with orthonormal bases
  * V_J. Because H commutes with J², each parameter's matrix is projected once,
  * H_p^J = V_Jᵀ H_p V_J, and every later evaluation only sums and diagonalises the small J blocks.
+ * The projection computes only the entries that can be non-zero: the Coulomb integrals F^k, G^k
+ * commute with L² and S², so they join only basis states of the same S and L; the spin–orbit
+ * operator is of rank 1 in spin and in orbit, so it joins only |ΔS| ≤ 1 and |ΔL| ≤ 1 (Condon &
+ * Shortley 1935, §§9¹, 10¹; Cowan 1981, §11-4). Each basis vector's dot products run over its
+ * non-zero entries only.
  * LS classes are the joint eigenspaces of L², S² (and Racah's pairing operator for one open
  * subshell, which gives the seniority); L², S² and the pairing conserve M_L and M_S, so they are
  * diagonalised per (M_L, M_S) piece of the block, and J² is then diagonalised inside each class.
@@ -14,9 +19,17 @@
  * one-electron l·s of each subshell (which count the electrons with j = l − ½ and j = l + ½).
  */
 import type { Configuration, Subshell } from './types';
-import { centralTwoMJ, checkDeterminantBudget, determinantBlock, orbitalSet, type OrbitalSet } from './determinants';
+import {
+	centralTwoMJ,
+	checkDeterminantBudget,
+	determinantBlock,
+	orbitalSet,
+	rowOf,
+	type DeterminantBlock,
+	type OrbitalSet
+} from './determinants';
 import { parameterMatrices, type ParameterMatrices } from './hamiltonian';
-import { jSquared, lSquared, pairing, seniorityFromPairing, sSquared } from './momentum-operators';
+import { denseSubmatrix, jSquared, lSquared, pairing, seniorityFromPairing, sSquared, type SparseSymmetric } from './momentum-operators';
 import { radialParameters, shellName, type RadialParameter } from './slater-parameters';
 import { symmetricEigen } from './symmetric-eigen';
 import { asSubshells, formatConfiguration } from './parse';
@@ -48,7 +61,8 @@ export interface JSpace {
 	param: Float64Array[];
 	/** The basis is LS-coupled: the LS class (index into `lsClasses`) of each basis vector. */
 	lsOf: Int32Array;
-	jj: { cls: number; projector: Float64Array }[];
+	/** Per jj class, an orthonormal basis of its eigenspace in this J space (rows of length dim). */
+	jj: { cls: number; vectors: Float64Array[] }[];
 }
 
 export interface EnergyStructure {
@@ -74,36 +88,199 @@ export function clearEnergyCache(): void {
 	cache.clear();
 }
 
+/** Every parameter matrix's entries by source row (both triangles): row i feeds column `col[k]`. */
+interface RowsOfH {
+	start: Int32Array;
+	col: Int32Array;
+	coef: Float64Array;
+	param: Int32Array;
+}
+
+function rowsOfH(m: ParameterMatrices): RowsOfH {
+	const { rows, cols, coef, param } = m;
+	const count = new Int32Array(m.n + 1);
+	for (let e = 0; e < rows.length; e++) {
+		count[rows[e] + 1]++;
+		if (rows[e] !== cols[e]) count[cols[e] + 1]++;
+	}
+	for (let i = 0; i < m.n; i++) count[i + 1] += count[i];
+	const fill = count.slice(0, m.n);
+	const out: RowsOfH = {
+		start: count,
+		col: new Int32Array(count[m.n]),
+		coef: new Float64Array(count[m.n]),
+		param: new Int32Array(count[m.n])
+	};
+	const put = (from: number, to: number, e: number) => {
+		const k = fill[from]++;
+		out.col[k] = to;
+		out.coef[k] = coef[e];
+		out.param[k] = param[e];
+	};
+	for (let e = 0; e < rows.length; e++) {
+		put(rows[e], cols[e], e);
+		if (rows[e] !== cols[e]) put(cols[e], rows[e], e);
+	}
+	return out;
+}
+
 /**
  * V H_p Vᵀ for every parameter p, with V the dim × n basis (rows) and H_p the sparse upper-triangle
- * entries. Works column-major (n × dim) so that every inner loop runs over contiguous memory.
+ * entries; only the entries that `joins(p, a, b)` allows are computed (the others are zero by the
+ * selection rules above). `support[a]` lists the non-zero positions of basis row a.
  */
-function projectParameters(m: ParameterMatrices, basis: Float64Array, dim: number, n: number): Float64Array[] {
-	const Vt = new Float64Array(n * dim);
-	for (let a = 0; a < dim; a++) for (let i = 0; i < n; i++) Vt[i * dim + a] = basis[a * n + i];
-	const T = m.params.map(() => new Float64Array(n * dim));
-	const { rows, cols, coef, param } = m;
-	for (let e = 0; e < rows.length; e++) {
-		const r = rows[e] * dim;
-		const c = cols[e] * dim;
-		const v = coef[e];
-		const t = T[param[e]];
-		for (let a = 0; a < dim; a++) t[c + a] += v * Vt[r + a];
-		if (r !== c) for (let a = 0; a < dim; a++) t[r + a] += v * Vt[c + a];
+function projectParameters(
+	m: ParameterMatrices,
+	H: RowsOfH,
+	basis: Float64Array,
+	dim: number,
+	n: number,
+	support: Int32Array[],
+	joins: (p: number, a: number, b: number) => boolean
+): Float64Array[] {
+	const np = m.params.length;
+	// T_p row b = H_p v_b (dense n), reading only the rows of H at the non-zero entries of v_b.
+	const T = m.params.map(() => new Float64Array(dim * n));
+	for (let b = 0; b < dim; b++) {
+		const o = b * n;
+		const sb = support[b];
+		for (let s = 0; s < sb.length; s++) {
+			const i = sb[s];
+			const v = basis[o + i];
+			for (let k = H.start[i]; k < H.start[i + 1]; k++) T[H.param[k]][o + H.col[k]] += H.coef[k] * v;
+		}
 	}
-	return T.map((t) => {
-		const P = new Float64Array(dim * dim);
-		for (let i = 0; i < n; i++) {
-			const o = i * dim;
-			for (let a = 0; a < dim; a++) {
-				const va = Vt[o + a];
-				if (va === 0) continue;
-				const pa = a * dim;
-				for (let b = 0; b < dim; b++) P[pa + b] += va * t[o + b];
+	const P = m.params.map(() => new Float64Array(dim * dim));
+	for (let p = 0; p < np; p++) {
+		const t = T[p];
+		const out = P[p];
+		for (let a = 0; a < dim; a++) {
+			const sa = support[a];
+			const va = a * n;
+			for (let b = a; b < dim; b++) {
+				if (!joins(p, a, b)) continue;
+				const tb = b * n;
+				let sum = 0;
+				for (let k = 0; k < sa.length; k++) {
+					const i = sa[k];
+					sum += basis[va + i] * t[tb + i];
+				}
+				out[a * dim + b] = sum;
+				out[b * dim + a] = sum;
 			}
 		}
-		return P;
+	}
+	return P;
+}
+
+/** A vector on a few positions of a piece: `pos` are piece-local positions, `val` the values there. */
+interface LocalVector {
+	pos: Int32Array;
+	val: Float64Array;
+}
+
+/**
+ * Eigenvectors of S² in one piece (block indices `idx`), grouped by 2S. Determinants that occupy the
+ * same spatial orbitals form S²'s blocks (s± only flips spins), each small and diagonalised alone.
+ */
+function spinEigenvectors(S2: SparseSymmetric, block: DeterminantBlock, idx: readonly number[]): Map<number, LocalVector[]> {
+	const groups = new Map<string, number[]>();
+	idx.forEach((i, a) => {
+		const key = Array.from(rowOf(block, i), (o) => o >> 1).join(',');
+		const g = groups.get(key);
+		if (g) g.push(a);
+		else groups.set(key, [a]);
 	});
+	const out = new Map<number, LocalVector[]>();
+	for (const pos of groups.values()) {
+		const d = pos.length;
+		const eig = symmetricEigen(
+			denseSubmatrix(
+				S2,
+				pos.map((a) => idx[a])
+			),
+			d
+		);
+		for (let r = 0; r < d; r++) {
+			const twoS = nearestTwoK(eig.values[r], 'S²');
+			const list = out.get(twoS) ?? [];
+			list.push({ pos: Int32Array.from(pos), val: eig.vectors.slice(r * d, r * d + d) });
+			out.set(twoS, list);
+		}
+	}
+	return out;
+}
+
+/** The d × d matrix ⟨u_a|M|u_b⟩ of a sparse operator that stays inside the piece (`local` maps block → piece positions). */
+function projectOnto(M: SparseSymmetric, vecs: readonly LocalVector[], idx: readonly number[], local: Int32Array): Float64Array {
+	const d = vecs.length;
+	const Mu = vecs.map(({ pos, val }) => {
+		const out = new Float64Array(idx.length);
+		for (let t = 0; t < pos.length; t++) {
+			const i = idx[pos[t]];
+			for (let k = M.start[i]; k < M.start[i + 1]; k++) out[local[M.col[k]]] += val[t] * M.val[k];
+		}
+		return out;
+	});
+	const W = new Float64Array(d * d);
+	for (let a = 0; a < d; a++)
+		for (let b = a; b < d; b++) {
+			const { pos, val } = vecs[b];
+			let s = 0;
+			for (let t = 0; t < pos.length; t++) s += val[t] * Mu[a][pos[t]];
+			W[a * d + b] = s;
+			W[b * d + a] = s;
+		}
+	return W;
+}
+
+/** cᵀ W c for a d × d row-major W. */
+function quadraticForm(W: Float64Array, c: ArrayLike<number>, d: number): number {
+	let s = 0;
+	for (let a = 0; a < d; a++) {
+		let row = 0;
+		for (let b = 0; b < d; b++) row += W[a * d + b] * c[b];
+		s += c[a] * row;
+	}
+	return s;
+}
+
+/** The weight of the s-th ζ matrix in the sum that separates the jj classes (irrational; common practice, no source). */
+const zetaWeight = (s: number) => 1 + s * Math.SQRT2 * 3.1;
+
+/** ⟨Σ l·s⟩ of l^N = (l/2)(N − n₋) − ((l+1)/2) n₋ with n₋ electrons in j = l − ½, solved for n₋. */
+const lowerFromLs = (l: number, N: number, z: number) => ((l / 2) * N - z) / ((2 * l + 1) / 2);
+
+/**
+ * Every possible jj class with its eigenvalue of Σ_s w_s (Σ l·s)_s, so that an eigenvalue names its
+ * class without a quadratic form; null when two candidates lie too close to tell apart.
+ */
+function lowerCandidates(set: OrbitalSet, params: RadialParameter[]): { lower: number[]; value: number }[] | null {
+	let out: { lower: number[]; value: number }[] = [{ lower: [], value: 0 }];
+	const zetaOf = new Map(params.filter((p) => p.kind === 'zeta').map((p, s) => [p.shells[0], s]));
+	set.shells.forEach((sh, si) => {
+		const s = zetaOf.get(si);
+		const next: typeof out = [];
+		for (const c of out) {
+			if (s === undefined) next.push({ lower: [...c.lower, 0], value: c.value });
+			else
+				for (let lo = Math.max(0, sh.occupancy - (2 * sh.l + 2)); lo <= Math.min(sh.occupancy, 2 * sh.l); lo++) {
+					const z = (sh.l / 2) * (sh.occupancy - lo) - ((sh.l + 1) / 2) * lo;
+					next.push({ lower: [...c.lower, lo], value: c.value + zetaWeight(s) * z });
+				}
+		}
+		out = next;
+	});
+	const sorted = out.map((c) => c.value).sort((a, b) => a - b);
+	for (let i = 1; i < sorted.length; i++) if (sorted[i] - sorted[i - 1] < 1e-3) return null;
+	return out;
+}
+
+/** The candidate whose eigenvalue matches `value`, or null (then the caller measures each subshell). */
+function decodeLower(candidates: { lower: number[]; value: number }[] | null, value: number): number[] | null {
+	if (!candidates) return null;
+	for (const c of candidates) if (Math.abs(c.value - value) <= QUANTUM_NUMBER_TOLERANCE * Math.max(1, Math.abs(value))) return c.lower;
+	return null;
 }
 
 function nearestTwoK(x: number, what: string): number {
@@ -141,7 +318,9 @@ export function energyStructure(
 	const matrices = parameterMatrices(set, block, params);
 
 	// LS classes per (M_L) piece; within the block M_S is fixed by M_L, and L², S² and the pairing
-	// operator conserve M_L, so each piece is diagonalised on its own.
+	// operator conserve M_L, so each piece is treated on its own. S² changes only spins, so it is
+	// block-diagonal over the spatial orbitals a determinant occupies: it is diagonalised on each such
+	// small group first, then L² (with the pairing operator) inside each S of the piece.
 	const L2 = lSquared(set, block);
 	const S2 = sSquared(set, block);
 	const J2 = jSquared(set, block);
@@ -156,49 +335,45 @@ export function energyStructure(
 		if (list) list.push(i);
 		else pieces.set(block.ML[i], [i]);
 	}
-	// Irrational weights keep the joint eigenvalues of different classes apart (common practice, no source).
-	const wS = Math.PI;
+	// An irrational weight keeps the joint eigenvalues of L² and the pairing operator apart (common practice, no source).
 	const wQ = Math.E / 7;
+	const local = new Int32Array(n).fill(-1);
 	for (const idx of pieces.values()) {
 		const m = idx.length;
-		const K = new Float64Array(m * m);
-		for (let a = 0; a < m; a++)
-			for (let b = 0; b < m; b++) {
-				const ia = idx[a] * n + idx[b];
-				K[a * m + b] = L2[ia] + wS * S2[ia] + (single ? wQ * single[ia] : 0);
-			}
-		const eig = symmetricEigen(K, m);
-		for (let r = 0; r < m; r++) {
-			const val = eig.vectors.slice(r * m, r * m + m);
-			let l2 = 0;
-			let s2 = 0;
-			let q = 0;
-			for (let a = 0; a < m; a++)
-				for (let b = 0; b < m; b++) {
-					const w = val[a] * val[b];
-					const ia = idx[a] * n + idx[b];
-					l2 += w * L2[ia];
-					s2 += w * S2[ia];
-					if (single) q += w * single[ia];
+		idx.forEach((i, a) => (local[i] = a));
+		for (const [twoS, vecs] of spinEigenvectors(S2, block, idx)) {
+			const d = vecs.length;
+			const WL = projectOnto(L2, vecs, idx, local);
+			const WQ = single ? projectOnto(single, vecs, idx, local) : null;
+			const K = WQ ? WL.map((x, i) => x + wQ * WQ[i]) : WL;
+			const eig = symmetricEigen(K, d);
+			for (let r = 0; r < d; r++) {
+				const c = eig.vectors.subarray(r * d, r * d + d);
+				const L = nearestTwoK(quadraticForm(WL, c, d), 'L²') / 2;
+				let seniority: number | null = null;
+				if (WQ) {
+					const q = quadraticForm(WQ, c, d);
+					const sv = seniorityFromPairing(set.shells[0].l, set.shells[0].occupancy, q);
+					if (sv.error > 1e-6 * Math.max(1, q)) throw new Error(`internal error: pairing eigenvalue ${q} fits no seniority`);
+					seniority = sv.v;
 				}
-			const L = nearestTwoK(l2, 'L²') / 2;
-			const twoS = nearestTwoK(s2, 'S²');
-			let seniority: number | null = null;
-			if (single) {
-				const sv = seniorityFromPairing(set.shells[0].l, set.shells[0].occupancy, q);
-				if (sv.error > 1e-6 * Math.max(1, q)) throw new Error(`internal error: pairing eigenvalue ${q} fits no seniority`);
-				seniority = sv.v;
+				const val = new Float64Array(m);
+				for (let k = 0; k < d; k++) {
+					const { pos, val: u } = vecs[k];
+					for (let t = 0; t < pos.length; t++) val[pos[t]] += c[k] * u[t];
+				}
+				const ck = `${twoS},${L},${seniority}`;
+				let cls = lsIndex.get(ck);
+				if (cls === undefined) {
+					cls = lsClasses.length;
+					lsClasses.push({ twoS, L, seniority });
+					lsIndex.set(ck, cls);
+					classVectors.push([]);
+				}
+				classVectors[cls].push({ idx, val });
 			}
-			const ck = `${twoS},${L},${seniority}`;
-			let cls = lsIndex.get(ck);
-			if (cls === undefined) {
-				cls = lsClasses.length;
-				lsClasses.push({ twoS, L, seniority });
-				lsIndex.set(ck, cls);
-				classVectors.push([]);
-			}
-			classVectors[cls].push({ idx, val });
 		}
+		idx.forEach((i) => (local[i] = -1));
 	}
 
 	// LS-coupled basis: J² commutes with L², S² and the pairing operator, so it is diagonalised
@@ -207,30 +382,32 @@ export function energyStructure(
 	lsClasses.forEach((_, cls) => {
 		const vs = classVectors[cls];
 		const d = vs.length;
-		// J² u for each class vector (dense n), then the d × d class matrix.
-		const Ju = vs.map(({ idx, val }) => {
-			const out = new Float64Array(n);
-			idx.forEach((i, a) => {
-				const v = val[a];
-				if (v === 0) return;
-				const row = i * n;
-				for (let j = 0; j < n; j++) out[j] += v * J2[row + j];
-			});
-			return out;
-		});
+		// The d × d class matrix ⟨u_b|J²|u_a⟩ from the sparse J²; J² = J₋J₊ + J_z² + J_z moves M_L by at
+		// most 1, so vectors on pieces further apart are not joined.
+		const ML = vs.map((v) => block.ML[v.idx[0]]);
 		const C = new Float64Array(d * d);
-		for (let a = 0; a < d; a++)
-			for (let b = 0; b < d; b++) {
-				let s = 0;
-				vs[b].idx.forEach((i, k) => (s += vs[b].val[k] * Ju[a][i]));
-				C[a * d + b] = s;
+		const Ju = new Float64Array(n);
+		for (let a = 0; a < d; a++) {
+			const { idx, val } = vs[a];
+			for (let t = 0; t < idx.length; t++) {
+				const i = idx[t];
+				const v = val[t];
+				if (v === 0) continue;
+				for (let k = J2.start[i]; k < J2.start[i + 1]; k++) Ju[J2.col[k]] += v * J2.val[k];
 			}
-		for (let a = 0; a < d; a++)
-			for (let b = a + 1; b < d; b++) {
-				const s = (C[a * d + b] + C[b * d + a]) / 2;
-				C[a * d + b] = s;
-				C[b * d + a] = s;
+			for (let b = a; b < d; b++) {
+				if (Math.abs(ML[b] - ML[a]) > 1) continue;
+				const u = vs[b];
+				let sum = 0;
+				for (let t = 0; t < u.idx.length; t++) sum += u.val[t] * Ju[u.idx[t]];
+				C[a * d + b] = sum;
+				C[b * d + a] = sum;
 			}
+			for (let t = 0; t < idx.length; t++) {
+				const i = idx[t];
+				for (let k = J2.start[i]; k < J2.start[i + 1]; k++) Ju[J2.col[k]] = 0;
+			}
+		}
 		const eig = symmetricEigen(C, d);
 		for (let r = 0; r < d; r++) {
 			const twoJ = nearestTwoK(eig.values[r], 'J²');
@@ -250,8 +427,10 @@ export function energyStructure(
 	const zetaParams = params.map((p, i) => (p.kind === 'zeta' ? i : -1)).filter((i) => i >= 0);
 	const jjClasses: JjClass[] = [];
 	const jjIndex = new Map<string, number>();
+	const jjCandidates = lowerCandidates(set, params);
 
 	const spaces: JSpace[] = [];
+	const hRows = rowsOfH(matrices);
 	const sortedJ = [...groups.keys()].sort((a, b) => a - b);
 	for (const twoJ of sortedJ) {
 		const members = groups.get(twoJ)!;
@@ -259,40 +438,43 @@ export function energyStructure(
 		const basis = new Float64Array(dim * n);
 		members.forEach((m, r) => basis.set(m.vec, r * n));
 		const lsOf = Int32Array.from(members.map((m) => m.cls));
-		const param = projectParameters(matrices, basis, dim, n).map((P, p) => {
+		const support = members.map((m) => {
+			const nz: number[] = [];
+			for (let i = 0; i < n; i++) if (m.vec[i] !== 0) nz.push(i);
+			return Int32Array.from(nz);
+		});
+		const twoS = members.map((m) => lsClasses[m.cls].twoS);
+		const L = members.map((m) => lsClasses[m.cls].L);
+		const joins = (p: number, a: number, b: number) =>
+			params[p].kind === 'zeta' ? Math.abs(twoS[a] - twoS[b]) <= 2 && Math.abs(L[a] - L[b]) <= 1 : twoS[a] === twoS[b] && L[a] === L[b];
+		const param = projectParameters(matrices, hRows, basis, dim, n, support, joins).map((P, p) => {
 			for (let a = 0; a < dim; a++) P[a * dim + a] -= matrices.average[p];
-			// symmetrise against rounding
-			for (let a = 0; a < dim; a++)
-				for (let b = a + 1; b < dim; b++) {
-					const s = (P[a * dim + b] + P[b * dim + a]) / 2;
-					P[a * dim + b] = s;
-					P[b * dim + a] = s;
-				}
 			return P;
 		});
-		// jj projectors from the eigenvectors of Σ_s c_s (l·s)_s in this J space.
-		const jj: { cls: number; projector: Float64Array }[] = [];
+		// jj classes from the eigenvectors of Σ_s c_s (l·s)_s in this J space.
+		const jj: { cls: number; vectors: Float64Array[] }[] = [];
 		if (zetaParams.length > 0) {
 			const Z = new Float64Array(dim * dim);
 			zetaParams.forEach((p, s) => {
-				const weight = 1 + s * Math.SQRT2 * 3.1;
+				const weight = zetaWeight(s);
 				for (let i = 0; i < dim * dim; i++) Z[i] += weight * param[p][i];
 			});
 			const ez = symmetricEigen(Z, dim);
-			const acc = new Map<number, Float64Array>();
+			const acc = new Map<number, Float64Array[]>();
 			for (let r = 0; r < dim; r++) {
 				const u = ez.vectors.subarray(r * dim, r * dim + dim);
-				const lower = set.shells.map((sh, si) => {
-					const p = params.findIndex((x) => x.kind === 'zeta' && x.shells[0] === si);
-					if (p < 0) return 0; // s subshell: j = ½ only, counted as upper
-					let z = 0;
-					for (let a = 0; a < dim; a++) for (let b = 0; b < dim; b++) z += u[a] * u[b] * param[p][a * dim + b];
-					// ⟨l·s⟩ = (l/2)(N − n₋) − ((l+1)/2) n₋  ⇒  n₋ = ((l/2)N − z)/((2l+1)/2)
-					const nl = ((sh.l / 2) * sh.occupancy - z) / ((2 * sh.l + 1) / 2);
-					const r0 = Math.round(nl);
-					if (Math.abs(nl - r0) > 1e-6) throw new Error(`internal error: jj occupation ${nl} is not an integer`);
-					return r0;
-				});
+				const lower =
+					decodeLower(jjCandidates, ez.values[r]) ??
+					set.shells.map((sh, si) => {
+						const p = params.findIndex((x) => x.kind === 'zeta' && x.shells[0] === si);
+						if (p < 0) return 0; // s subshell: j = ½ only, counted as upper
+						let z = 0;
+						for (let a = 0; a < dim; a++) for (let b = 0; b < dim; b++) z += u[a] * u[b] * param[p][a * dim + b];
+						const nl = lowerFromLs(sh.l, sh.occupancy, z);
+						const r0 = Math.round(nl);
+						if (Math.abs(nl - r0) > 1e-6) throw new Error(`internal error: jj occupation ${nl} is not an integer`);
+						return r0;
+					});
 				const key2 = lower.join(',');
 				let cls = jjIndex.get(key2);
 				if (cls === undefined) {
@@ -300,11 +482,11 @@ export function energyStructure(
 					jjClasses.push({ lower, label: jjLabel(set, lower) });
 					jjIndex.set(key2, cls);
 				}
-				let P = acc.get(cls);
-				if (!P) acc.set(cls, (P = new Float64Array(dim * dim)));
-				for (let a = 0; a < dim; a++) for (let b = 0; b < dim; b++) P[a * dim + b] += u[a] * u[b];
+				const list = acc.get(cls);
+				if (list) list.push(u.slice());
+				else acc.set(cls, [u.slice()]);
 			}
-			for (const [cls, projector] of acc) jj.push({ cls, projector });
+			for (const [cls, vectors] of acc) jj.push({ cls, vectors });
 		}
 		spaces.push({ twoJ, dim, basis, param, lsOf, jj });
 	}
@@ -342,4 +524,15 @@ function jjLabel(set: OrbitalSet, lower: number[]): string {
 		if (b) parts.push(b);
 	});
 	return parts.join(' ');
+}
+
+/** The weight (0 … 1) of one jj class in a level's eigenvector: Σ (u·ψ)² over the class's basis. */
+export function jjWeight(entry: { vectors: Float64Array[] }, psi: ArrayLike<number>): number {
+	let w = 0;
+	for (const u of entry.vectors) {
+		let dot = 0;
+		for (let a = 0; a < u.length; a++) dot += u[a] * psi[a];
+		w += dot * dot;
+	}
+	return w;
 }

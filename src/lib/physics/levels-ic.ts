@@ -6,7 +6,7 @@
  * Computed energies are models, not measurements.
  */
 import type { Configuration, Subshell } from './types';
-import { energyStructure, type EnergyStructure } from './energy-structure';
+import { energyStructure, jjWeight, type EnergyStructure } from './energy-structure';
 import { resolveParameters, type EnergyParameterInput } from './slater-parameters';
 import { symmetricEigen } from './symmetric-eigen';
 import { asSubshells, parseConfiguration } from './parse';
@@ -100,18 +100,6 @@ export function solveRaw(structure: EnergyStructure, Eav: number, values: ArrayL
 	return out.sort((a, b) => a.energy - b.energy);
 }
 
-function quadratic(P: Float64Array, v: Float64Array): number {
-	const d = v.length;
-	let s = 0;
-	for (let a = 0; a < d; a++) {
-		if (v[a] === 0) continue;
-		let t = 0;
-		for (let b = 0; b < d; b++) t += P[a * d + b] * v[b];
-		s += v[a] * t;
-	}
-	return s;
-}
-
 /** Squared coefficients below this are left out of compositions (they are rounding noise; common practice, no source). */
 export const COMPONENT_FLOOR = 1e-12;
 
@@ -182,7 +170,7 @@ export function intermediateLevels(
 		const twoJ = structure.spaces[r.space].twoJ;
 		const components = lsComposition(structure, r);
 		const jj = structure.spaces[r.space].jj
-			.map(({ cls, projector }) => ({ label: structure.jjClasses[cls].label, percent: 100 * Math.max(0, quadratic(projector, r.vector)) }))
+			.map((entry) => ({ label: structure.jjClasses[entry.cls].label, percent: 100 * Math.min(1, jjWeight(entry, r.vector)) }))
 			.filter((x) => x.percent > 100 * COMPONENT_FLOOR)
 			.sort((a, b) => b.percent - a.percent);
 		return {

@@ -7,7 +7,7 @@
  * non-crossing rule), so the k-th lowest level of each J at every point is one continuous curve.
  */
 import type { Configuration, Subshell } from './types';
-import { energyStructure } from './energy-structure';
+import { energyStructure, jjWeight } from './energy-structure';
 import { resolveParameters, type EnergyParameterInput } from './slater-parameters';
 import { lsComposition, solveRaw, MODEL_ENERGY_CAUTION } from './levels-ic';
 import { asSubshells, parseConfiguration } from './parse';
@@ -78,9 +78,9 @@ export function couplingSweep(
 			if (i === points - 1) {
 				const sp = structure.spaces[r.space];
 				let best = { label: '', w: -1 };
-				for (const { cls, projector } of sp.jj) {
-					let w = 0;
-					for (let a = 0; a < sp.dim; a++) for (let b = 0; b < sp.dim; b++) w += r.vector[a] * projector[a * sp.dim + b] * r.vector[b];
+				for (const entry of sp.jj) {
+					const w = jjWeight(entry, r.vector);
+					const cls = entry.cls;
 					if (w > best.w) best = { label: structure.jjClasses[cls].label, w };
 				}
 				c.jjLabel = best.label;

@@ -9,6 +9,8 @@ export interface ParameterPreset {
 	id: string;
 	name: string;
 	note: string;
+	/** The configuration the set was derived for (open subshells as the engine writes them); it is chosen by itself only there. */
+	config: string;
 	/** Exact set of parameter ids the preset is meant for. */
 	ids: string[];
 	values: Record<string, number>;
@@ -22,6 +24,7 @@ const d = (shell: string, B: number, C: number, zeta: number) => {
 export const LITERATURE_PRESETS: ParameterPreset[] = [
 	{
 		id: 'c1-2p2',
+		config: '2p2',
 		name: 'C I 2p²',
 		note: 'Derived here from the C I term energies ¹D₂ ≈ 10 193 cm⁻¹ (= 6F₂ above ³P) and the ³P intervals ≈ 16 and 27 cm⁻¹, quoted from memory of the standard level tables.',
 		ids: ['F2(2p,2p)', 'zeta(2p)'],
@@ -29,6 +32,7 @@ export const LITERATURE_PRESETS: ParameterPreset[] = [
 	},
 	{
 		id: 'v3-3d2',
+		config: '3d2',
 		name: 'V³⁺ free ion 3d²',
 		note: 'Free-ion Racah B = 861, C = 4165 and ζ = 209 cm⁻¹ as tabulated in ligand-field texts (e.g. Figgis & Hitchman 2000), quoted from memory.',
 		ids: ['F2(3d,3d)', 'F4(3d,3d)', 'zeta(3d)'],
@@ -36,6 +40,7 @@ export const LITERATURE_PRESETS: ParameterPreset[] = [
 	},
 	{
 		id: 'ni2-3d8',
+		config: '3d8',
 		name: 'Ni²⁺ free ion 3d⁸',
 		note: 'Free-ion Racah B = 1041, C = 4831 and ζ = 649 cm⁻¹ (ligand-field tables, e.g. Lever 1984), quoted from memory.',
 		ids: ['F2(3d,3d)', 'F4(3d,3d)', 'zeta(3d)'],
@@ -43,6 +48,7 @@ export const LITERATURE_PRESETS: ParameterPreset[] = [
 	},
 	{
 		id: 'pr3-4f2',
+		config: '4f2',
 		name: 'Pr³⁺ 4f² (in LaF₃)',
 		note: 'Crystal-field-free part of the Pr³⁺:LaF₃ parameters of Carnall, Goodman, Rajnak & Rana (J. Chem. Phys. 90, 3443, 1989), rounded, quoted from memory.',
 		ids: ['F2(4f,4f)', 'F4(4f,4f)', 'F6(4f,4f)', 'zeta(4f)'],
@@ -50,6 +56,7 @@ export const LITERATURE_PRESETS: ParameterPreset[] = [
 	},
 	{
 		id: 'nd3-4f3',
+		config: '4f3',
 		name: 'Nd³⁺ 4f³ (in LaF₃)',
 		note: 'Crystal-field-free part of the Nd³⁺:LaF₃ parameters of Carnall, Goodman, Rajnak & Rana (1989), rounded, quoted from memory.',
 		ids: ['F2(4f,4f)', 'F4(4f,4f)', 'F6(4f,4f)', 'zeta(4f)'],
