@@ -1,7 +1,9 @@
-import type { Handle, HandleServerError } from '@sveltejs/kit';
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import { dev } from '$app/environment';
 import { resolveSession } from '$lib/server/session';
 import { handleServerError, withApiErrorShape } from '$lib/server/api-errors';
 import { withSecurityHeaders } from '$lib/server/security-headers';
+import { startCatcherWithApp } from '$lib/server/mail-catcher-start';
 
 export const handle: Handle = async ({ event, resolve }) => {
 	await resolveSession(event);
@@ -10,3 +12,8 @@ export const handle: Handle = async ({ event, resolve }) => {
 };
 
 export const handleError: HandleServerError = (input) => handleServerError(input);
+
+/** Starts the local mail catcher with the app when it is wanted (MAIL_CATCHER=on, or `npm run dev`). */
+export const init: ServerInit = async () => {
+	await startCatcherWithApp(dev);
+};

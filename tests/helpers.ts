@@ -1,4 +1,5 @@
 import { expect, type Browser, type Page } from '@playwright/test';
+import Database from 'better-sqlite3';
 import { mkdirSync } from 'node:fs';
 
 export const PASSWORD = 'e2e-password-123';
@@ -26,4 +27,47 @@ export async function newUser(browser: Browser, name: string, who: string) {
 export async function shot(page: Page, name: string) {
 	mkdirSync('tests/screenshots', { recursive: true });
 	await page.screenshot({ path: `tests/screenshots/${name}.png`, fullPage: true });
+}
+
+/** The test server's database file (playwright.config.ts: one per port). */
+export const E2E_DB = `data/e2e-${Number(process.env.E2E_PORT ?? 4173)}.db`;
+
+export interface CaughtMail {
+	to: string;
+	sender: string;
+	subject: string;
+	body: string;
+}
+
+/**
+ * A test-only reader of the mail catcher's store: the newest message the app's local SMTP catcher
+ * RECEIVED for `to` (rows with status 'caught' in the outbox table of the test database; the app
+ * writes only 'failed' rows itself). Waits a little, as a mailbox would be checked.
+ */
+export async function caughtMailTo(to: string): Promise<CaughtMail> {
+	let found: CaughtMail | undefined;
+	await expect
+		.poll(
+			() => {
+				const db = new Database(E2E_DB, { readonly: true, fileMustExist: true });
+				try {
+					found = db
+						.prepare(`select "to", sender, subject, body from outbox where "to" = ? and status = 'caught' order by id desc limit 1`)
+						.get(to) as CaughtMail | undefined;
+				} finally {
+					db.close();
+				}
+				return found !== undefined;
+			},
+			{ message: `a caught mail to ${to}`, timeout: 10_000 }
+		)
+		.toBe(true);
+	return found!;
+}
+
+/** The path of the first link to this site in a mail that matches `/reset/…` or `/invite/…`. */
+export function linkPath(mail: CaughtMail, kind: 'reset' | 'invite'): string {
+	const link = new RegExp(`https?://\\S+/${kind}/[A-Za-z0-9_-]+`).exec(mail.body)?.[0];
+	if (!link) throw new Error(`no ${kind} link in the mail to ${mail.to}`);
+	return new URL(link).pathname;
 }

@@ -1,28 +1,20 @@
 import { expect, test, type Page } from '@playwright/test';
-import Database from 'better-sqlite3';
 import { request as httpRequest } from 'node:http';
-import { PASSWORD, newUser, shot } from './helpers';
+import { PASSWORD, caughtMailTo, linkPath, newUser, shot } from './helpers';
 
 /**
  * Account safety and hardening against the built server: redirects after sign-in, security
  * headers and the page CSP (no violations while the pages and exports run), the API's one
  * error shape for 404/405/413/431, and a reset that revokes API tokens. Reset links are read
- * from the test's own database file (playwright.config.ts), not through any route.
+ * from what the app's local mail catcher received over SMTP (tests/helpers.ts), not through any route.
  */
 const PORT = Number(process.env.E2E_PORT ?? 4173);
-const DB = `data/e2e-${PORT}.db`;
 
-/** The newest reset link mailed to `email`, read from the outbox table of the test database. */
-function resetLinkFor(email: string): string {
-	const db = new Database(DB, { readonly: true, fileMustExist: true });
-	try {
-		const row = db.prepare('select body from outbox where "to" = ? order by id desc limit 1').get(email) as { body: string } | undefined;
-		const link = row && /https?:\/\/\S+\/reset\/[A-Za-z0-9_-]+/.exec(row.body)?.[0];
-		if (!link) throw new Error(`no reset mail for ${email}`);
-		return new URL(link).pathname;
-	} finally {
-		db.close();
-	}
+/** The newest reset link mailed to `email`, as the app's local SMTP catcher received it. */
+async function resetLinkFor(email: string): Promise<string> {
+	const mail = await caughtMailTo(email);
+	expect(mail.sender).toBe('no-reply@termwright.localhost');
+	return linkPath(mail, 'reset');
 }
 
 /** Collects CSP violations reported in the page (console and securitypolicyviolation events). */
@@ -166,7 +158,7 @@ test('a password reset signs out other sessions and revokes API tokens, and the 
 	await otherPage.getByLabel('E-mail').fill(email);
 	await otherPage.getByRole('button', { name: 'Send reset link' }).click();
 	await expect(otherPage.getByRole('status')).toContainText('If an account uses this e-mail');
-	await otherPage.goto(resetLinkFor(email));
+	await otherPage.goto(await resetLinkFor(email));
 	await otherPage.getByLabel(/New password/).fill('a-brand-new-password');
 	await otherPage.getByRole('button', { name: 'Set password and sign in' }).click();
 	await expect(otherPage).toHaveURL(/\/account\?ended=reset/);
@@ -227,11 +219,11 @@ test('change password needs the current one; sign out everywhere ends the other 
 	await second.close();
 });
 
-test('the outbox view is off outside development and demos, even for the site admin', async ({ browser }) => {
+test('the caught-mail view is off outside development and demos, even for the site admin', async ({ browser }) => {
 	const { context, page } = await newUser(browser, 'Ada Admin', 'outbox');
 	const answer = await page.goto('/admin/outbox');
 	// 404 for the view that is off, or 403 when this account is not the site admin (another test signed up first).
 	expect([403, 404]).toContain(answer?.status());
-	await expect(page.getByRole('link', { name: 'Outbox' })).toHaveCount(0);
+	await expect(page.getByRole('link', { name: 'Caught mail' })).toHaveCount(0);
 	await context.close();
 });

@@ -21,14 +21,15 @@ export const ACTIVITY_KINDS = {
 	'note.saved': 'changed a level note',
 	'note.confirmed': 'confirmed an assignment',
 	'note.deleted': 'deleted a level note',
-	// (planned) Energy solver, Line matcher, uploads and invitations join here.
+	'invitation.sent': 'sent an invitation',
+	'invitation.revoked': 'revoked an invitation',
+	'invitation.accepted': 'joined by invitation',
+	// (planned) Energy solver, Line matcher and uploads join here.
 	'parameters.saved': 'saved parameters',
 	'fit.saved': 'saved a fit',
 	'list.uploaded': 'uploaded a list',
 	'identification.accepted': 'accepted an identification',
-	'identification.rejected': 'rejected an identification',
-	'invitation.sent': 'sent an invitation',
-	'invitation.accepted': 'joined by invitation'
+	'identification.rejected': 'rejected an identification'
 } as const;
 
 export type ActivityKind = keyof typeof ACTIVITY_KINDS;

@@ -66,7 +66,16 @@ const LISTED: Listed = {
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },
 	'GET /api/v1/projects/:projectId/members': { summary: 'members and their roles', access: 'viewer' },
 	'POST /api/v1/projects/:projectId/members': {
-		summary: 'add a member { email, role }; the answer is the same whether or not an account uses the e-mail',
+		summary: 'add a member { email, role }; an address without an account is invited; the answer is the same either way',
+		access: 'owner'
+	},
+	'GET /api/v1/projects/:projectId/invitations': { summary: 'open invitations (pending or expired), newest first', access: 'owner' },
+	'POST /api/v1/projects/:projectId/invitations': {
+		summary: 'invite an e-mail address { email, role }: mails a one-time link valid 7 days; again for the same address replaces the link',
+		access: 'owner'
+	},
+	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': {
+		summary: 'revoke an invitation: its link stops working',
 		access: 'owner'
 	},
 	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },

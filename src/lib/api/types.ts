@@ -157,6 +157,20 @@ export interface MemberJson {
 	since?: string;
 }
 
+/** An open invitation (pending, or expired and not yet resent), as owners see it. No token: only its hash is stored. */
+export interface InvitationJson {
+	id: string;
+	email: string;
+	role: ProjectRoleName;
+	state: 'pending' | 'expired';
+	invitedByName: string;
+	/** Whether the mail server took the last mail with the link ('failed': resend it). */
+	mailStatus: 'sent' | 'failed';
+	createdAt: string;
+	sentAt: string;
+	expiresAt: string;
+}
+
 export interface ShelfEntryJson {
 	id: string;
 	projectId: string;
@@ -280,8 +294,11 @@ export interface ApiResponses {
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
 	'DELETE /api/v1/projects/:projectId': null;
 	'GET /api/v1/projects/:projectId/members': { members: MemberJson[] };
-	/** The same answer whether or not an account uses the e-mail (no account discovery). */
+	/** The same answer whether or not an account uses the e-mail (no account discovery); an address without one is invited. */
 	'POST /api/v1/projects/:projectId/members': { result: { email: string; role: ProjectRoleName; message: string } };
+	'GET /api/v1/projects/:projectId/invitations': { invitations: InvitationJson[] };
+	'POST /api/v1/projects/:projectId/invitations': { invitation: InvitationJson };
+	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': null;
 	'GET /api/v1/projects/:projectId/membership': { membership: { role: ProjectRoleName } };
 	'DELETE /api/v1/projects/:projectId/membership': null;
 	'GET /api/v1/projects/:projectId/shelf': { entries: Omit<ShelfEntryJson, 'warnings'>[]; nextCursor: string | null };
@@ -300,7 +317,7 @@ export interface ApiResponses {
 export type RouteKey = keyof ApiResponses;
 
 /** Date fields as the server holds them before JSON turns them into ISO strings. */
-type DateKeys = 'createdAt' | 'updatedAt' | 'since' | 'lastUsedAt' | 'expiresAt';
+type DateKeys = 'createdAt' | 'updatedAt' | 'since' | 'lastUsedAt' | 'expiresAt' | 'sentAt';
 
 /** What a handler may pass for a body of type T: the same, but with Date objects where the JSON has dates. */
 export type Sendable<T> = T extends (infer U)[]

@@ -1,11 +1,21 @@
 /**
  * Password reset by one-time link (common practice, no source): the request never reveals
- * whether an account exists, the link works once, and it ends the account's sessions.
+ * whether an account exists, the link works once, and it ends the account's sessions. The mail
+ * goes over SMTP to a local catcher (catch-mail.ts), as in the app; the links are read from what
+ * the catcher received.
  */
-import { describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { signUp, checkPassword } from './services/users';
 import { requestPasswordReset, resetPassword, resetTokenUser } from './services/password-reset';
-import { capturedMail } from './mail';
+import { capturedMail, useMailCatcher } from './mail';
+import { catchMailInTests } from './catch-mail';
+import { startMailCatcher, type MailCatcher } from './mail-catcher';
+
+let catcher: MailCatcher;
+beforeAll(async () => {
+	catcher = await catchMailInTests();
+});
+afterAll(() => catcher.close());
 
 const linkIn = (text: string) => /\/reset\/([A-Za-z0-9_-]+)/.exec(text)?.[1];
 
@@ -151,9 +161,35 @@ describe('the outbox view', () => {
 			await resetPassword(token, 'second-password');
 			expect(outboxForAdmin(adminActor)[0].body).toContain(`/reset/${token}`);
 			process.env.MAIL_OUTBOX = 'off';
-			expect(() => outboxForAdmin(adminActor)).toThrow(/outbox view is off/);
+			expect(() => outboxForAdmin(adminActor)).toThrow(/mail view is off/);
 		} finally {
 			delete process.env.MAIL_OUTBOX;
+		}
+	});
+});
+
+describe('when the mail server does not take the mail', () => {
+	it('the request fails with 502 for a known and an unknown address alike, and no live link is left', async () => {
+		await signUp({ name: 'Unlucky', email: 'unlucky@example.org', password: 'first-password' });
+		const gone = await startMailCatcher({ port: 0, store: () => {} });
+		await gone.close();
+		useMailCatcher(gone.url);
+		const quiet = vi.spyOn(console, 'error').mockImplementation(() => {});
+		try {
+			const known = requestPasswordReset('unlucky@example.org', 'http://localhost', '203.0.113.120');
+			await expect(known).rejects.toThrow(/The reset link could not be sent: the mail server did not take it/);
+			const unknown = requestPasswordReset('nobody-here@example.org', 'http://localhost', '203.0.113.121');
+			await expect(unknown).rejects.toThrow(/The reset link could not be sent: the mail server did not take it/);
+			expect(await known.catch((e: { status?: number }) => e.status)).toBe(502);
+			expect(capturedMail(1)[0]).toMatchObject({ to: 'unlucky@example.org', status: 'failed', body: '' });
+			const { db } = await import('./db');
+			const { passwordResets, users } = await import('./db/schema');
+			const { eq } = await import('drizzle-orm');
+			const user = db.select().from(users).where(eq(users.email, 'unlucky@example.org')).get()!;
+			expect(db.select().from(passwordResets).where(eq(passwordResets.userId, user.id)).all()).toEqual([]);
+		} finally {
+			quiet.mockRestore();
+			useMailCatcher(catcher.url);
 		}
 	});
 });

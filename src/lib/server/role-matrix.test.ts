@@ -11,14 +11,17 @@
  * Each call runs the real load/action/handler against a fresh project on the test's in-memory
  * database. The expected outcomes are the product's own rules (common practice, no source).
  */
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { isActionFailure, isHttpError, isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { eq } from 'drizzle-orm';
 import { API_ROUTES, type RouteAccess } from '$lib/api/routes';
 import type { Actor } from './access';
 import { db } from './db';
-import { apiTokens, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
+import { apiTokens, invitations, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
 import { newId } from './ids';
+import { newSecret } from './secret-tokens';
+import { catchMailInTests } from './catch-mail';
+import type { MailCatcher } from './mail-catcher';
 import { signUp } from './services/users';
 import { createToken } from './services/tokens';
 
@@ -46,6 +49,9 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /forgot ?/default': 'public',
 	'PAGE /reset/:token': 'public',
 	'ACTION /reset/:token ?/default': 'public',
+	'PAGE /invite/:token': 'public',
+	'ACTION /invite/:token ?/accept': 'signed-in',
+	'ACTION /invite/:token ?/signup': 'public',
 	'PAGE /signout': 'public',
 	'ACTION /signout ?/default': 'public',
 	'PAGE /account': 'signed-in',
@@ -65,6 +71,8 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /projects/:projectId/members': 'viewer',
 	'PAGE /projects/:projectId/activity': 'viewer',
 	'ACTION /projects/:projectId/members ?/add': 'owner',
+	'ACTION /projects/:projectId/members ?/resend': 'owner',
+	'ACTION /projects/:projectId/members ?/revoke': 'owner',
 	'ACTION /projects/:projectId/members ?/role': 'owner',
 	'ACTION /projects/:projectId/members ?/remove': 'owner',
 	'ACTION /projects/:projectId/members ?/leave': 'viewer',
@@ -121,6 +129,13 @@ async function makeTokens() {
 	}
 }
 
+// Mail (reset links, invitations) goes over SMTP to a local catcher, as in the app.
+let catcher: MailCatcher;
+beforeAll(async () => {
+	catcher = await catchMailInTests();
+});
+afterAll(() => catcher.close());
+
 beforeAll(async () => {
 	// The first account on a site is its admin (users.ts); it is a member of no project here.
 	const admin = await signUp({ name: 'Site Admin', email: 'admin@matrix.example', password: PASSWORD });
@@ -175,7 +190,32 @@ async function restoreActors() {
 // ------------------------------------------------------------------ sample inputs (so that allowed calls succeed)
 
 type Ctx = { projectId: string; entryId: string; annotationId: string; actor: Actor | null; n: number };
-type Sample = { query?: string; body?: Record<string, unknown>; form?: (ctx: Ctx) => Record<string, string>; json?: (ctx: Ctx) => unknown };
+type Sample = {
+	query?: string;
+	body?: Record<string, unknown>;
+	form?: (ctx: Ctx) => Record<string, string>;
+	json?: (ctx: Ctx) => unknown;
+	/** Route parameters besides projectId, entryId and annotationId (e.g. a live invitation token). */
+	params?: (ctx: Ctx) => Record<string, string>;
+};
+
+/** A live invitation in the call's project, written directly; its id and the token of its link. */
+function invitationIn(ctx: Ctx, email: string) {
+	const { secret, hash } = newSecret();
+	const id = newId();
+	db.insert(invitations)
+		.values({
+			id,
+			projectId: ctx.projectId,
+			email,
+			role: 'viewer',
+			tokenHash: hash,
+			invitedBy: people.owner.id,
+			expiresAt: new Date(Date.now() + 3600_000)
+		})
+		.run();
+	return { id, token: secret };
+}
 
 const SAMPLES: Record<string, Sample> = {
 	'GET /api/v1/terms': { query: '?config=2p2' },
@@ -210,6 +250,18 @@ const SAMPLES: Record<string, Sample> = {
 	'ACTION /projects/:projectId ?/rename': { form: () => ({ name: 'Renamed', description: '' }) },
 	'ACTION /projects/:projectId ?/delete': { form: () => ({ confirm: 'Matrix nebula' }) },
 	'ACTION /projects/:projectId/members ?/add': { form: () => ({ email: 'stranger@matrix.example', role: 'viewer' }) },
+	'ACTION /projects/:projectId/members ?/resend': { form: (c) => ({ invitationId: invitationIn(c, `resend${c.n}@matrix.example`).id }) },
+	'ACTION /projects/:projectId/members ?/revoke': { form: (c) => ({ invitationId: invitationIn(c, `revoke${c.n}@matrix.example`).id }) },
+	// The signed-in actor's own invitation (members of the call's project accept and keep their role).
+	'ACTION /invite/:token ?/accept': { params: (c) => ({ token: invitationIn(c, c.actor?.email ?? `nobody${c.n}@matrix.example`).token }) },
+	'ACTION /invite/:token ?/signup': {
+		params: (c) => ({ token: invitationIn(c, `invitee${c.n}@matrix.example`).token }),
+		form: () => ({ name: 'Invited Person', password: PASSWORD })
+	},
+	'POST /api/v1/projects/:projectId/invitations': { json: (c) => ({ email: `api-invitee${c.n}@matrix.example`, role: 'viewer' }) },
+	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': {
+		params: (c) => ({ invitationId: invitationIn(c, `api-revoke${c.n}@matrix.example`).id })
+	},
 	'ACTION /projects/:projectId/members ?/role': { form: () => ({ userId: people.viewer.id, role: 'editor' }) },
 	'ACTION /projects/:projectId/members ?/remove': { form: () => ({ userId: people.viewer.id }) },
 	'ACTION /projects/:projectId/shelf/new ?/default': { form: () => ({ title: 'Neon excited', notation: '2p5 3p' }) },
@@ -344,7 +396,8 @@ function eventFor(cell: Cell, actorName: ActorName, ctx: Ctx): RequestEvent {
 		projectId: ctx.projectId,
 		entryId: ctx.entryId,
 		annotationId: ctx.annotationId,
-		token: 'not-a-live-reset-token'
+		token: 'not-a-live-reset-token',
+		...sample.params?.(ctx)
 	};
 	const pathname = cell.path.replace(/:(\w+)/g, (_, p: string) => encodeURIComponent(params[p]));
 	const url = new URL(`http://localhost${pathname}${sample.query ?? ''}`);

@@ -129,12 +129,24 @@ export const levelAnnotations = sqliteTable(
 	]
 );
 
-/** Mail that the app "sent": the local outbox used in development, demos and tests. */
+export const MAIL_STATUSES = ['caught', 'failed'] as const;
+export type MailStatus = (typeof MAIL_STATUSES)[number];
+
+/**
+ * Mail as the local catcher received it over SMTP (`status` 'caught', written by mail-catcher.ts
+ * in development, demos and tests), and mail the app could not hand to its SMTP server (`status`
+ * 'failed', written by mail.ts wherever it runs, so a failed send is never lost silently). A failed
+ * row keeps who, what and why but not the body: that would hold a one-time link in plain text.
+ */
 export const outbox = sqliteTable('outbox', {
 	id: integer('id').primaryKey({ autoIncrement: true }),
 	to: text('to').notNull(),
+	sender: text('sender').notNull().default(''),
 	subject: text('subject').notNull(),
 	body: text('body').notNull(),
+	status: text('status', { enum: MAIL_STATUSES }).notNull().default('caught'),
+	/** Why a send failed (the transport's words, with no credentials). */
+	error: text('error'),
 	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
 });
 
@@ -189,4 +201,35 @@ export const activityLog = sqliteTable(
 		index('activity_project_actor_idx').on(t.projectId, t.actorId, t.id),
 		index('activity_project_kind_idx').on(t.projectId, t.kind, t.id)
 	]
+);
+
+/**
+ * Invitations to join a project, sent to an e-mail address with a role. Only the SHA-256 of the
+ * one-time token is stored (like password resets). An invitation is pending while it is neither
+ * accepted nor revoked and `expiresAt` lies ahead; resending gives it a new token (the old one
+ * stops working). Accepted and revoked rows stay, so the members page can say what became of a link.
+ */
+export const invitations = sqliteTable(
+	'invitations',
+	{
+		id: text('id').primaryKey(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		email: text('email').notNull(),
+		role: text('role', { enum: PROJECT_ROLES }).notNull(),
+		tokenHash: text('token_hash').notNull().unique(),
+		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		/** Whether the last mail with the link reached the mail server. */
+		mailStatus: text('mail_status', { enum: ['sent', 'failed'] })
+			.notNull()
+			.default('sent'),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		sentAt: integer('sent_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+		acceptedBy: text('accepted_by').references(() => users.id, { onDelete: 'set null' }),
+		revokedAt: integer('revoked_at', { mode: 'timestamp_ms' })
+	},
+	(t) => [index('invitations_project_idx').on(t.projectId, t.email)]
 );

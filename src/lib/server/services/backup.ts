@@ -11,6 +11,10 @@
  * the log keeps the name it had). A file of a newer format version, of another format, or one that
  * is damaged is refused with a message saying what is wrong, and nothing is written.
  *
+ * Pending invitations are NOT in the file, on purpose: their tokens (even hashed) must not travel,
+ * and a copy restored on another server must not accept links mailed by this one. Owners invite
+ * again after a restore; members whose accounts exist come back by e-mail as above.
+ *
  * EXTENSION POINT: records of other features (Energy solver parameter sets and fits, uploaded level
  * and line lists, Line matcher identifications, …) join the file as a `BackupSection` in
  * `BACKUP_SECTIONS` below: a key, a zod schema of its data, `dump` (read the project's records) and

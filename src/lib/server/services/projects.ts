@@ -79,14 +79,25 @@ export const memberAddedMessage = (email: string, role: ProjectRole) =>
 /**
  * Adds the account that uses an e-mail, with a role. The answer is the same whether or not such
  * an account exists, so the form cannot be used to find out who has an account (only the member
- * list, which owners see anyway, tells). Someone who is already a member gets 409.
+ * list, which owners see anyway, tells). Someone who is already a member gets 409. The pages and
+ * the API use `addOrInvite` (services/invitations.ts), which invites an address without an account.
  */
 export function addMember(actor: Actor, projectId: string, input: unknown) {
 	projectAccess(actor, projectId, 'owner');
 	const data = parseInput(memberInputSchema, input);
-	db.transaction((tx) => {
+	addAccountByEmail(actor, projectId, data);
+	return { email: data.email, role: data.role, message: memberAddedMessage(data.email, data.role) };
+}
+
+/**
+ * Makes the account that uses `email` a member with `role`, with its log entry, in one transaction.
+ * False when no account uses the e-mail; 409 when it is already a member. The caller has checked
+ * that `actor` owns the project.
+ */
+export function addAccountByEmail(actor: Actor, projectId: string, data: { email: string; role: ProjectRole }): boolean {
+	return db.transaction((tx) => {
 		const user = tx.select({ id: users.id, name: users.name }).from(users).where(eq(users.email, data.email)).get();
-		if (!user) return;
+		if (!user) return false;
 		const existing = tx
 			.select()
 			.from(memberships)
@@ -101,8 +112,8 @@ export function addMember(actor: Actor, projectId: string, input: unknown) {
 			summary: `added ${user.name} as ${data.role}`,
 			subject: `member:${user.id}`
 		});
+		return true;
 	});
-	return { email: data.email, role: data.role, message: memberAddedMessage(data.email, data.role) };
 }
 
 /** A member leaves a project of their own accord; the last owner must hand over first. */

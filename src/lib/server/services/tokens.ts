@@ -2,7 +2,6 @@
  * Personal API tokens. The token is shown once at creation; the database keeps its SHA-256.
  * A token acts with its owner's roles, exactly like a signed-in session.
  */
-import { createHash, randomBytes } from 'node:crypto';
 import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
@@ -11,9 +10,9 @@ import type { Actor } from '../access';
 import { notFound } from '../errors';
 import { newId } from '../ids';
 import { parseInput } from '../validation';
+import { hashSecret, newSecret } from '../secret-tokens';
 
 const TOKEN_PREFIX = 'tw_';
-const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 const nameSchema = z.string().trim().min(1, 'Token name must not be empty').max(60, 'Token name must be at most 60 characters');
 
 export function listTokens(actor: Actor) {
@@ -28,11 +27,9 @@ export function listTokens(actor: Actor) {
 /** Creates a token and returns its secret, which is not stored and cannot be shown again. */
 export function createToken(actor: Actor, name: unknown): { id: string; secret: string } {
 	const cleanName = parseInput(nameSchema, name);
-	const secret = TOKEN_PREFIX + randomBytes(24).toString('base64url');
+	const { secret, hash } = newSecret(24, TOKEN_PREFIX);
 	const id = newId();
-	db.insert(apiTokens)
-		.values({ id, userId: actor.id, name: cleanName, tokenHash: sha256(secret) })
-		.run();
+	db.insert(apiTokens).values({ id, userId: actor.id, name: cleanName, tokenHash: hash }).run();
 	return { id, secret };
 }
 
@@ -51,7 +48,7 @@ export function actorForToken(secret: string): Actor | null {
 		.select({ tokenId: apiTokens.id, id: users.id, email: users.email, name: users.name, siteRole: users.siteRole })
 		.from(apiTokens)
 		.innerJoin(users, eq(users.id, apiTokens.userId))
-		.where(eq(apiTokens.tokenHash, sha256(secret)))
+		.where(eq(apiTokens.tokenHash, hashSecret(secret)))
 		.get();
 	if (!row) return null;
 	db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, row.tokenId)).run();

@@ -10,6 +10,7 @@ import { newId } from '../ids';
 import { hashPassword, verifyPassword } from '../password';
 import { createBackoffLimiter, createLimiter, waitInWords } from '../rate-limit';
 import { parseInput, signInSchema, signUpSchema, siteRoleSchema } from '../validation';
+import type { Tx } from './activity';
 
 /**
  * Sign-in throttling that nobody can aim at someone else's account:
@@ -29,23 +30,39 @@ const perAddress = createLimiter(SIGN_IN_ADDRESS_LIMIT.failures, SIGN_IN_ADDRESS
 export const SIGN_IN_FAILED = 'E-mail or password is not right';
 
 export async function signUp(input: unknown): Promise<Actor> {
+	const account = await prepareAccount(input);
+	return db.transaction((tx) => insertAccount(tx, account));
+}
+
+/** A checked sign-up with its password hashed, ready for `insertAccount` (hashing is slow, so it runs before any transaction). */
+export interface PreparedAccount {
+	id: string;
+	email: string;
+	name: string;
+	passwordHash: string;
+}
+
+/** Validates a sign-up (name, e-mail, password) and hashes the password; 400 when the e-mail is taken. */
+export async function prepareAccount(input: unknown): Promise<PreparedAccount> {
 	const data = parseInput(signUpSchema, input);
 	const taken = db.select({ id: users.id }).from(users).where(eq(users.email, data.email)).get();
 	// Saying "taken" reveals that an account exists; a sign-up form cannot avoid that
 	// without e-mail confirmation, so we keep the words neutral.
 	if (taken) throw badRequest('An account cannot be made with this e-mail; sign in instead, or use another address', { field: 'email' });
-	const passwordHash = await hashPassword(data.password);
-	const id = newId();
-	return db.transaction((tx) => {
-		// The first account on a fresh site administers it.
-		const count = tx
-			.select({ n: sql<number>`count(*)` })
-			.from(users)
-			.get()!.n;
-		const siteRole = count === 0 ? 'admin' : 'member';
-		tx.insert(users).values({ id, email: data.email, name: data.name, passwordHash, siteRole }).run();
-		return { id, email: data.email, name: data.name, siteRole };
-	});
+	return { id: newId(), email: data.email, name: data.name, passwordHash: await hashPassword(data.password) };
+}
+
+/** Writes a prepared account with `tx`; the first account on a fresh site administers it. */
+export function insertAccount(tx: Tx, account: PreparedAccount): Actor {
+	const count = tx
+		.select({ n: sql<number>`count(*)` })
+		.from(users)
+		.get()!.n;
+	const siteRole = count === 0 ? 'admin' : 'member';
+	tx.insert(users)
+		.values({ ...account, siteRole })
+		.run();
+	return { id: account.id, email: account.email, name: account.name, siteRole };
 }
 
 export async function checkPassword(input: unknown, address: string): Promise<Actor> {
