@@ -11,6 +11,7 @@ import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { pageSchema, parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
 import { changedFields, logActivity } from './activity';
+import { recordNoteChange } from './note-history';
 import { ConfigurationError, parseConfiguration } from '../../physics/parse';
 import { parseSpecies, type Species } from '../../physics/elements';
 import { checkElectrons, sameConfiguration } from '../../physics/implied';
@@ -228,13 +229,17 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 		// A different configuration: every attached note is kept but detached until someone
 		// reattaches it to a level of the new configuration or deletes it (never hidden or moved).
 		const after = { notation: data.notation ?? current.notation, species: data.species ?? current.species };
-		const detachedNotes = keepsConfiguration(current, after)
-			? 0
-			: db
+		// Each detached note's history records it (note-history.ts).
+		const detached = keepsConfiguration(current, after)
+			? []
+			: tx
 					.update(levelAnnotations)
 					.set({ detached: true, detachedFrom: current.notation })
 					.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.detached, false)))
-					.run().changes;
+					.returning()
+					.all();
+		for (const note of detached) recordNoteChange(tx, projectId, note, 'detached', actor);
+		const detachedNotes = detached.length;
 		db.update(shelfEntries)
 			.set({ ...data, version: version + 1, updatedBy: actor.id, updatedAt: new Date() })
 			.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.version, version)))
