@@ -7,8 +7,9 @@
 import { describe, expect, it } from 'vitest';
 import { TASKS } from '../../server/compute/tasks';
 import { bridgeForJ, bridgeJValues } from './bridgeFilter';
+import type { BridgeResponse } from '$lib/api/types';
 
-const full = TASKS.bridge.run({ config: '2p 3d' });
+const full = TASKS.bridge.run({ config: '2p 3d' }) as BridgeResponse;
 
 describe('Coupling bridge filtered by J', () => {
 	it('2p 3d has J = 0…4 with 1, 3, 4, 3, 1 levels', () => {
