@@ -36,6 +36,8 @@ test('filter the bridge of 2p 3d to J = 1 and 3: 6 levels drawn, the badge still
 		await compact.check();
 		await expect.poll(async () => Number(await panel.getByTestId('bridge-svg').getAttribute('height'))).toBeLessThan(tall);
 		await expect(panel.getByTestId('bridge-ls-level')).toHaveCount(6);
+		// At 768 px the three columns are wider than the frame: the page says it scrolls sideways.
+		await expect(panel.getByTestId('bridge-scroll-cue')).toHaveCount(width === 768 ? 1 : 0);
 		await shot(page, `bridge-filter-${width}`);
 		// "all" shows the whole bridge again.
 		await filter.getByRole('button', { name: 'all' }).click();
