@@ -4,6 +4,7 @@ import { resolveSession } from '$lib/server/session';
 import { handleServerError, withApiErrorShape } from '$lib/server/api-errors';
 import { withSecurityHeaders } from '$lib/server/security-headers';
 import { startCatcherWithApp } from '$lib/server/mail-catcher-start';
+import { fillLibraryColumns } from '$lib/server/services/shelf-library';
 
 export const handle: Handle = async ({ event, resolve }) => {
 	await resolveSession(event);
@@ -14,6 +15,8 @@ export const handle: Handle = async ({ event, resolve }) => {
 export const handleError: HandleServerError = (input) => handleServerError(input);
 
 /** Starts the local mail catcher with the app when it is wanted (MAIL_CATCHER=on, or `npm run dev`). */
+/** Also fills the Shelf's derived columns (parity, open subshells) of rows saved before they existed. */
 export const init: ServerInit = async () => {
+	fillLibraryColumns();
 	await startCatcherWithApp(dev);
 };

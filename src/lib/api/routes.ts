@@ -80,7 +80,11 @@ const LISTED: Listed = {
 	},
 	'GET /api/v1/projects/:projectId/membership': { summary: 'your own role in the project', access: 'viewer' },
 	'DELETE /api/v1/projects/:projectId/membership': { summary: 'leave the project (not the last owner)', access: 'viewer' },
-	'GET /api/v1/projects/:projectId/shelf': { summary: 'the Shelf, a page at a time: ?limit=50&cursor=&q=', access: 'viewer' },
+	'GET /api/v1/projects/:projectId/shelf': {
+		summary:
+			'the Shelf, a page at a time: ?q=&species=Fe II&tag=&parity=even|odd&open=3d 4s&sort=updated|title&limit=50&cursor= (with matching and total counts)',
+		access: 'viewer'
+	},
 	'POST /api/v1/projects/:projectId/shelf': { summary: 'add a configuration to the Shelf', access: 'editor' },
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { summary: 'one Shelf entry', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { summary: 'change an entry; send the version you read', access: 'editor' },

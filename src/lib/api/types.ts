@@ -187,6 +187,18 @@ export interface ShelfEntryJson {
 	warnings: string[];
 }
 
+/** One page of the Shelf list with the counts and menus of its filters. */
+export interface ShelfPageJson {
+	entries: Omit<ShelfEntryJson, 'warnings'>[];
+	nextCursor: string | null;
+	/** Entries that pass the filters (all pages). */
+	matching: number;
+	/** Entries in the project. */
+	total: number;
+	/** The species and tags in use in the project, for the filter menus. */
+	facets: { species: string[]; tags: string[] };
+}
+
 export interface AnnotationJson {
 	id: string;
 	levelKey: string;
@@ -301,7 +313,7 @@ export interface ApiResponses {
 	'DELETE /api/v1/projects/:projectId/invitations/:invitationId': null;
 	'GET /api/v1/projects/:projectId/membership': { membership: { role: ProjectRoleName } };
 	'DELETE /api/v1/projects/:projectId/membership': null;
-	'GET /api/v1/projects/:projectId/shelf': { entries: Omit<ShelfEntryJson, 'warnings'>[]; nextCursor: string | null };
+	'GET /api/v1/projects/:projectId/shelf': ShelfPageJson;
 	'POST /api/v1/projects/:projectId/shelf': { entry: ShelfEntryJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson };
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson; detachedNotes: number };

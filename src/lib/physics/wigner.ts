@@ -54,6 +54,12 @@ function checkM(where: string, mName: string, tm: number, jName: string, tj: num
 	}
 }
 
+/** Checks each (j, m) pair of a coupling: j first, then its m (names as the caller's formula writes them). */
+function checkPairs(where: string, pairs: [jName: string, tj: number, mName: string, tm: number][]): void {
+	for (const [jName, tj] of pairs) checkJ(where, jName, tj);
+	for (const [jName, tj, mName, tm] of pairs) checkM(where, mName, tm, jName, tj);
+}
+
 /**
  * True when (a, b, c), given doubled, form a triad: |a − b| ≤ c ≤ a + b with a + b + c an integer
  * (the triangle condition, Edmonds 1957 §3.7 and §6.2). Never throws.
@@ -145,13 +151,11 @@ function sixJTriadsHold(t1: number, t2: number, t3: number, t4: number, t5: numb
  * @example wigner3j(2, 2, 0, 2, -2, 0) // (1 1 0; 1 −1 0) = +sqrt(1/3)
  */
 export function wigner3j(tj1: number, tj2: number, tj3: number, tm1: number, tm2: number, tm3: number): ExactSqrt {
-	const where = 'wigner3j';
-	checkJ(where, 'j1', tj1);
-	checkJ(where, 'j2', tj2);
-	checkJ(where, 'j3', tj3);
-	checkM(where, 'm1', tm1, 'j1', tj1);
-	checkM(where, 'm2', tm2, 'j2', tj2);
-	checkM(where, 'm3', tm3, 'j3', tj3);
+	checkPairs('wigner3j', [
+		['j1', tj1, 'm1', tm1],
+		['j2', tj2, 'm2', tm2],
+		['j3', tj3, 'm3', tm3]
+	]);
 	if (tm1 + tm2 + tm3 !== 0 || !isTriad(tj1, tj2, tj3)) return EXACT_ZERO;
 
 	const delta = triangleSquared(tj1, tj2, tj3);
@@ -187,13 +191,11 @@ export function wigner3j(tj1: number, tj2: number, tj3: number, tm1: number, tm2
  * @example clebschGordan(2, 0, 1, 1, 3, 1) // ⟨1 0, 1/2 1/2 | 3/2 1/2⟩ = +sqrt(2/3)
  */
 export function clebschGordan(tj1: number, tm1: number, tj2: number, tm2: number, tJ: number, tM: number): ExactSqrt {
-	const where = 'clebschGordan';
-	checkJ(where, 'j1', tj1);
-	checkJ(where, 'j2', tj2);
-	checkJ(where, 'J', tJ);
-	checkM(where, 'm1', tm1, 'j1', tj1);
-	checkM(where, 'm2', tm2, 'j2', tj2);
-	checkM(where, 'M', tM, 'J', tJ);
+	checkPairs('clebschGordan', [
+		['j1', tj1, 'm1', tm1],
+		['j2', tj2, 'm2', tm2],
+		['J', tJ, 'M', tM]
+	]);
 	if (tm1 + tm2 !== tM || !isTriad(tj1, tj2, tJ)) return EXACT_ZERO;
 	const threeJ = wigner3j(tj1, tj2, tJ, tm1, tm2, -tM);
 	const phase = minusOnePower((tj1 - tj2 + tM) / 2);

@@ -143,18 +143,6 @@ export const reattachSchema = z.object({
 	version: z.number({ error: 'version must be the number you last read' }).int().positive()
 });
 
-/** Paging of long lists: `limit` (1 … 200, default 50) and the `cursor` from the previous page. */
-export const pageSchema = z.object({
-	limit: z.coerce
-		.number({ error: 'limit must be a whole number from 1 to 200' })
-		.int('limit must be a whole number from 1 to 200')
-		.min(1, 'limit must be a whole number from 1 to 200')
-		.max(200, 'limit must be a whole number from 1 to 200')
-		.default(50),
-	cursor: z.string().max(200, 'cursor is not one this server gave out').optional(),
-	q: z.string().trim().max(100, 'the filter text must be at most 100 characters').optional()
-});
-
 /** Splits "a, b ,c" into tags. */
 export function splitTags(text: string): string[] {
 	return text

@@ -82,10 +82,20 @@ export const shelfEntries = sqliteTable(
 		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
 		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
 		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		/**
+		 * Derived from the notation when it is saved, so the library can filter in SQL: the parity
+		 * 'even' or 'odd' ('' when the notation no longer parses), null until computed.
+		 */
+		parity: text('parity'),
+		/** JSON array of the open subshells' labels, e.g. ["3d","4s"]; null until computed (see shelf-library.ts). */
+		openSubshells: text('open_subshells', { mode: 'json' }).$type<string[]>()
 	},
-	// The Shelf list filters on the project and pages by (updated_at, id), newest first.
-	(t) => [index('shelf_project_updated_idx').on(t.projectId, t.updatedAt, t.id)]
+	// The Shelf list filters on the project and pages by (updated_at, id), newest first, or by title (A to Z).
+	(t) => [
+		index('shelf_project_updated_idx').on(t.projectId, t.updatedAt, t.id),
+		index('shelf_project_title_idx').on(t.projectId, sql`${t.title} collate nocase`, t.id)
+	]
 );
 
 /**

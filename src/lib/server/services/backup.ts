@@ -41,6 +41,7 @@ import { projectAccess, type Actor } from '../access';
 import { badRequest } from '../errors';
 import { newId } from '../ids';
 import { logActivity, type Tx } from './activity';
+import { libraryColumns } from './shelf-library';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 
 /** What the file says it is. */
@@ -344,7 +345,14 @@ export function importProject(actor: Actor, fileText: string): ImportReport {
 			ctx.entryIds.set(e.ref, id);
 			const { ref: _ref, levelNotes: notes, createdBy, updatedBy, ...fields } = e;
 			tx.insert(shelfEntries)
-				.values({ id, projectId, ...fields, createdBy: ctx.userIdOf(createdBy), updatedBy: ctx.userIdOf(updatedBy) })
+				.values({
+					id,
+					projectId,
+					...fields,
+					...libraryColumns(fields.notation),
+					createdBy: ctx.userIdOf(createdBy),
+					updatedBy: ctx.userIdOf(updatedBy)
+				})
 				.run();
 			for (const n of notes) {
 				tx.insert(levelAnnotations)

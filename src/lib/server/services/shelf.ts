@@ -2,15 +2,25 @@
  * The Shelf: a project's saved configurations. Viewers read, editors write.
  * Updates carry the version the editor last read; a stale version is refused (409).
  */
-import { and, desc, eq, lt, or, sql } from 'drizzle-orm';
-import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
+import { and, eq, sql, type SQL } from 'drizzle-orm';
 import { db } from '../db';
 import { levelAnnotations, shelfEntries, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
-import { pageSchema, parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
+import { parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
 import { changedFields, logActivity } from './activity';
+import {
+	afterCursor,
+	decodeCursor,
+	encodeCursor,
+	fillLibraryColumns,
+	filterConditions,
+	libraryColumns,
+	orderOf,
+	projectFacets,
+	readShelfQuery
+} from './shelf-library';
 import { ConfigurationError, parseConfiguration } from '../../physics/parse';
 import { parseSpecies, type Species } from '../../physics/elements';
 import { checkElectrons, sameConfiguration } from '../../physics/implied';
@@ -136,53 +146,42 @@ export function notesDetachedBy(actor: Actor, projectId: string, entryId: string
 	return keepsConfiguration(current, after) ? 0 : attachedNoteCount(entryId);
 }
 
-const encodeCursor = (updatedAt: Date, id: string) => Buffer.from(`${updatedAt.getTime()}:${id}`).toString('base64url');
-
-function decodeCursor(cursor: string): { t: Date; id: string } {
-	const text = Buffer.from(cursor, 'base64url').toString('utf8');
-	const m = /^(\d{1,16}):([A-Za-z0-9_-]{1,64})$/.exec(text);
-	if (!m) throw badRequest('cursor is not one this server gave out: send the nextCursor of the previous page', { field: 'cursor' });
-	return { t: new Date(Number(m[1])), id: m[2] };
-}
-
-/** `column` contains `q` (case-insensitive for ASCII, as SQLite's LIKE), with % and _ taken literally. */
-const contains = (column: SQLiteColumn, q: string) => sql`${column} like ${`%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`} escape '\\'`;
-
 /**
- * One page of the Shelf, newest change first: `limit` entries (1 … 200, default 50) after `cursor`
- * (the `nextCursor` of the page before), optionally only those whose title, species, notation or
- * tags contain `q`. `nextCursor` is null on the last page.
+ * One page of the Shelf as a library: `limit` entries (1 … 200, default 50) after `cursor` (the
+ * `nextCursor` of the page before, for the same sort), filtered by text `q` (title, notes, species,
+ * configuration, tags), `species`, `tag`, `parity` (even, odd) and `open` subshells ("3d 4s": all
+ * open), sorted by `sort` = updated (newest change first, the default) or title (A to Z).
+ * `matching` counts the entries the filters let through, `total` those of the project; `facets`
+ * lists the species and tags in use. `nextCursor` is null on the last page.
  */
 export function listEntries(actor: Actor, projectId: string, query: unknown = {}) {
 	projectAccess(actor, projectId, 'viewer');
-	const { limit, cursor, q } = parseInput(pageSchema, query);
-	const after = cursor ? decodeCursor(cursor) : null;
-
+	const f = readShelfQuery(query);
+	const after = f.cursor ? decodeCursor(f.cursor, f.sort) : null;
+	fillLibraryColumns(projectId);
+	const where = filterConditions(projectId, f);
 	const rows = db
 		.select(entryColumns)
 		.from(shelfEntries)
-		.where(
-			and(
-				eq(shelfEntries.projectId, projectId),
-				after
-					? or(lt(shelfEntries.updatedAt, after.t), and(eq(shelfEntries.updatedAt, after.t), lt(shelfEntries.id, after.id)))
-					: undefined,
-				q
-					? or(
-							contains(shelfEntries.title, q),
-							contains(shelfEntries.species, q),
-							contains(shelfEntries.notation, q),
-							contains(shelfEntries.tags, q)
-						)
-					: undefined
-			)
-		)
-		.orderBy(desc(shelfEntries.updatedAt), desc(shelfEntries.id))
-		.limit(limit + 1)
+		.where(and(where, after ? afterCursor(after) : undefined))
+		.orderBy(...orderOf(f.sort))
+		.limit(f.limit + 1)
 		.all();
-	const page = rows.slice(0, limit);
+	const page = rows.slice(0, f.limit);
 	const last = page[page.length - 1];
-	return { entries: page, nextCursor: rows.length > limit && last ? encodeCursor(last.updatedAt, last.id) : null };
+	const count = (w: SQL | undefined) =>
+		db
+			.select({ n: sql<number>`count(*)` })
+			.from(shelfEntries)
+			.where(w)
+			.get()!.n;
+	return {
+		entries: page,
+		nextCursor: rows.length > f.limit && last ? encodeCursor(f.sort, last) : null,
+		matching: count(where),
+		total: count(eq(shelfEntries.projectId, projectId)),
+		facets: projectFacets(projectId)
+	};
 }
 
 export function getEntry(actor: Actor, projectId: string, entryId: string) {
@@ -199,7 +198,7 @@ export function createEntry(actor: Actor, projectId: string, input: unknown) {
 	const id = newId();
 	db.transaction((tx) => {
 		tx.insert(shelfEntries)
-			.values({ id, projectId, ...data, createdBy: actor.id, updatedBy: actor.id })
+			.values({ id, projectId, ...data, ...libraryColumns(data.notation), createdBy: actor.id, updatedBy: actor.id })
 			.run();
 		logActivity(tx, {
 			projectId,
@@ -236,7 +235,13 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 					.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.detached, false)))
 					.run().changes;
 		db.update(shelfEntries)
-			.set({ ...data, version: version + 1, updatedBy: actor.id, updatedAt: new Date() })
+			.set({
+				...data,
+				...(data.notation !== undefined ? libraryColumns(data.notation) : {}),
+				version: version + 1,
+				updatedBy: actor.id,
+				updatedAt: new Date()
+			})
 			.where(and(eq(shelfEntries.id, entryId), eq(shelfEntries.version, version)))
 			.run();
 		logActivity(tx, {

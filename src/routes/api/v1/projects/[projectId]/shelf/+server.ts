@@ -2,7 +2,7 @@ import type { RequestHandler } from './$types';
 import { createEntry, listEntries } from '$lib/server/services/shelf';
 import { api, apiActor, readJson, reply } from '$lib/server/http';
 
-/** One page of the Shelf: `?limit=1…200` (default 50), `&cursor=` the `nextCursor` of the page before, `&q=` filter text. */
+/** One page of the Shelf as a library: filters, sort and paging as in `listEntries` (services/shelf.ts). */
 export const GET: RequestHandler = api((event) =>
 	reply(
 		'GET /api/v1/projects/:projectId/shelf',
