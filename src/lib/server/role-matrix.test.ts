@@ -81,6 +81,8 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
 	'ACTION /projects/:projectId/shelf/:entryId ?/update': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/pastePreview': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/paste': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
@@ -283,6 +285,11 @@ const SAMPLES: Record<string, Sample> = {
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/annotate': {
 		form: () => ({ levelKey: '3P#1|1', observedEnergy: '16.4', status: 'proposed' })
+	},
+	// The fixture's entry has a note on ³P₂ (version 1), so the paste says it saw that version.
+	'ACTION /projects/:projectId/shelf/:entryId ?/pastePreview': { form: () => ({ text: '16.4 3P1\n43.5 3P2' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/paste': {
+		form: () => ({ text: '16.4 3P1\n43.5 3P2', seen: JSON.stringify({ '3P#1|1': 0, '3P#1|2': 1 }) })
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': {

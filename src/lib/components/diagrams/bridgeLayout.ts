@@ -31,13 +31,17 @@ export interface BridgeGeometry {
 }
 
 const STEP = 40;
+/** Compact rows for bridges of many levels: one label line per level. */
+const COMPACT_STEP = 20;
 const TOP = 104;
 
 /**
  * The geometry for `rows` levels per column; `jjLabelChars` sizes the room for the jj labels.
- * With `withJk` the middle column holds the jK levels, their labels set above the bars.
+ * With `withJk` the middle column holds the jK levels, their labels set above the bars; `compact`
+ * halves the row step (the picture then draws one short label line per level).
  */
-export function bridgeGeometry(rows: number, withJk: boolean, jjLabelChars: number): BridgeGeometry {
+export function bridgeGeometry(rows: number, withJk: boolean, jjLabelChars: number, compact = false): BridgeGeometry {
+	const step = compact ? COMPACT_STEP : STEP;
 	const columns: BridgeColumn[] = withJk
 		? [
 				{ id: 'ls', bar: [128, 180], title: 'LS coupling', subtitle: "Hund's heuristic order" },
@@ -50,8 +54,8 @@ export function bridgeGeometry(rows: number, withJk: boolean, jjLabelChars: numb
 			];
 	const jjBar = columns[columns.length - 1].bar;
 	const width = Math.max(jjBar[1] + 16 + Math.max(12, jjLabelChars) * 7.8, 640);
-	const height = TOP + (Math.max(rows, 1) - 1) * STEP + 70;
-	const yOf = (i: number) => TOP + (rows - 1 - i) * STEP;
+	const height = TOP + (Math.max(rows, 1) - 1) * step + 70;
+	const yOf = (i: number) => TOP + (rows - 1 - i) * step;
 	const column = (id: BridgeColumnId) => columns.find((c) => c.id === id);
 	const curve = (a: BridgeColumnId, i: number, b: BridgeColumnId, j: number) => {
 		const x0 = column(a)!.bar[1];
@@ -59,5 +63,5 @@ export function bridgeGeometry(rows: number, withJk: boolean, jjLabelChars: numb
 		const xm = (x0 + x1) / 2;
 		return `M ${x0} ${yOf(i)} C ${xm} ${yOf(i)}, ${xm} ${yOf(j)}, ${x1} ${yOf(j)}`;
 	};
-	return { columns, width, height, step: STEP, top: TOP, yOf, column, curve };
+	return { columns, width, height, step, top: TOP, yOf, column, curve };
 }

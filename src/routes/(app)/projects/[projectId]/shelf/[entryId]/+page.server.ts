@@ -2,6 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { deleteEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
+import { pasteNotes, previewPaste } from '$lib/server/services/paste-notes';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { readForm, shelfFieldsFrom } from '$lib/server/forms';
 
@@ -51,6 +52,30 @@ export const actions: Actions = {
 			typed: { observedEnergy: input.observedEnergy, uncertainty: input.uncertainty, comment: input.comment }
 		});
 		return result.ok ? { annotated: levelKey } : result.failure;
+	},
+	/** The preview of a pasted column of energies (for pages without JavaScript; with it, the page previews as you type). */
+	pastePreview: async (event) => {
+		const user = requireUser(event);
+		const text = (await readForm(event.request)).text('text');
+		const result = await forAction(() => previewPaste(user, event.params.projectId, event.params.entryId, text), { form: 'paste', text });
+		return result.ok ? { form: 'paste', text, preview: result.value } : result.failure;
+	},
+	/** Saves a pasted column of energies: every line or none, checked against the note versions the preview showed. */
+	paste: async (event) => {
+		const user = requireUser(event);
+		const form = await readForm(event.request);
+		const text = form.text('text');
+		let seen: unknown;
+		try {
+			seen = JSON.parse(form.text('seen') || '{}');
+		} catch {
+			seen = null; // the service says what `seen` must be
+		}
+		const result = await forAction(() => pasteNotes(user, event.params.projectId, event.params.entryId, { text, seen }), {
+			form: 'paste',
+			text
+		});
+		return result.ok ? { form: 'paste', pasted: result.value } : result.failure;
 	},
 	/** Deletes one note (attached or detached) by id. */
 	deleteNote: async (event) => {
