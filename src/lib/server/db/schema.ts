@@ -6,6 +6,7 @@ import { sql } from 'drizzle-orm';
 import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 import { NOTE_CHANGE_NAMES, type NoteChange } from '../../review';
+import type { FitResult } from '../../physics/fit';
 
 const now = sql`(unixepoch() * 1000)`;
 
@@ -285,4 +286,74 @@ export const invitations = sqliteTable(
 		revokedAt: integer('revoked_at', { mode: 'timestamp_ms' })
 	},
 	(t) => [index('invitations_project_idx').on(t.projectId, t.email)]
+);
+
+/** Energy parameters as the Energy solver and its API take them (cm⁻¹); mirrors EnergyParametersBody in $lib/api/types. */
+export interface StoredEnergyParameters {
+	Eav?: number;
+	F?: { k: number; a: string; b: string; value: number }[];
+	G?: { k: number; a: string; b: string; value: number }[];
+	zeta?: { shell: string; value: number }[];
+}
+
+/**
+ * A named set of Slater and spin–orbit parameters saved with a Shelf entry (services/parameter-sets.ts).
+ * Versioned like entries: a change sends the version it read (409 when stale). `notation` is the
+ * entry's configuration the set was saved for, so a set stays readable when the entry changes.
+ */
+export const parameterSets = sqliteTable(
+	'parameter_sets',
+	{
+		id: text('id').primaryKey(),
+		entryId: text('entry_id')
+			.notNull()
+			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		notation: text('notation').notNull(),
+		parameters: text('parameters', { mode: 'json' }).$type<StoredEnergyParameters>().notNull(),
+		comment: text('comment').notNull().default(''),
+		version: integer('version').notNull().default(1),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('parameter_sets_entry_idx').on(t.entryId, t.updatedAt)]
+);
+
+/** What a fit was asked: starting values, which parameters were free, linked or bounded, and the observed levels. */
+export interface StoredFitRequest {
+	parameters: StoredEnergyParameters;
+	vary: string[];
+	links?: { id: string; to: string; ratio?: number }[];
+	bounds?: { id: string; min?: number; max?: number }[];
+	observed: { J: string; energy: number; uncertainty?: number; assign?: string | number; levelKey?: string }[];
+	/** 'notes': the entry's annotated observed energies; 'typed': a list the user gave. */
+	observedFrom: 'notes' | 'typed';
+}
+
+/**
+ * A saved fit report of a Shelf entry: the request and the engine's answer as it returned them
+ * (fitted values ± σ, residuals obs − calc, rms, degrees of freedom), with who ran it and when.
+ * Reports are never edited; `rms` and `degreesOfFreedom` are copied out for lists.
+ */
+export const fitReports = sqliteTable(
+	'fit_reports',
+	{
+		id: text('id').primaryKey(),
+		entryId: text('entry_id')
+			.notNull()
+			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		/** The parameter set the fit started from, if any. */
+		parameterSetId: text('parameter_set_id').references(() => parameterSets.id, { onDelete: 'set null' }),
+		notation: text('notation').notNull(),
+		request: text('request', { mode: 'json' }).$type<StoredFitRequest>().notNull(),
+		/** FitResult of src/lib/physics/fit.ts, as the engine returned it. */
+		result: text('result', { mode: 'json' }).$type<FitResult>().notNull(),
+		rms: real('rms').notNull(),
+		degreesOfFreedom: integer('degrees_of_freedom').notNull(),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('fit_reports_entry_idx').on(t.entryId, t.createdAt)]
 );
