@@ -29,6 +29,7 @@ export const ACTIVITY_KINDS = {
 	// (planned) Energy solver, Line matcher and uploads join here.
 	'parameters.saved': 'saved parameters',
 	'fit.saved': 'saved a fit',
+	'parameters.deleted': 'deleted parameters',
 	'list.uploaded': 'uploaded a list',
 	'identification.accepted': 'accepted an identification',
 	'identification.rejected': 'rejected an identification'

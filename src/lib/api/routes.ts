@@ -108,7 +108,35 @@ const LISTED: Listed = {
 		summary: 'every change of one note (also of a deleted one), oldest first: values after the change, status, who, when',
 		access: 'viewer'
 	},
-	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' }
+	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' },
+	'GET /api/v1/projects/:projectId/shelf/:entryId/parameters': {
+		summary: 'energy parameter sets saved with the entry, most recently changed first',
+		access: 'viewer'
+	},
+	'POST /api/v1/projects/:projectId/shelf/:entryId/parameters': {
+		summary: 'save a parameter set { name, parameters: { Eav, F, G, zeta }, comment? } for the entry’s configuration',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': { summary: 'one parameter set', access: 'viewer' },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': {
+		summary: 'change a parameter set { name?, parameters?, comment?, version } (stale versions get 409)',
+		access: 'editor'
+	},
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': {
+		summary: 'delete a parameter set: ?version= as read (stale versions get 409)',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits': { summary: 'saved fit reports of the entry, newest first', access: 'viewer' },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/fits': {
+		summary:
+			'fit and save the report { parameters, vary, links?, bounds?, observed?, parameterSetId? }; without observed, the entry’s annotated energies',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId': { summary: 'one saved fit report', access: 'viewer' },
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': {
+		summary: 'a fit report as a file: ?format=csv|json|tex[&download]',
+		access: 'viewer'
+	}
 };
 
 /** The routes in the order listed, as plain data. */

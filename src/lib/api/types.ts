@@ -268,6 +268,44 @@ export type EnergiesResponse = IcResult & { limits: EnergyLimits };
 export type EnergySweepResponse = SweepResult & { limits: EnergyLimits };
 export type FitResponse = FitResult & { limits: EnergyLimits };
 
+/** A named set of energy parameters saved with a Shelf entry (GET …/shelf/:entryId/parameters). */
+export interface ParameterSetJson {
+	id: string;
+	entryId: string;
+	name: string;
+	/** The entry's configuration (as typed) the set was saved for. */
+	notation: string;
+	parameters: EnergyParametersBody;
+	comment: string;
+	version: number;
+	createdAt: string;
+	createdBy: string | null;
+	updatedAt: string;
+	updatedBy: string | null;
+}
+
+/** A saved fit of a Shelf entry: what was asked, and the engine's answer as it returned it. */
+export interface FitReportJson {
+	id: string;
+	entryId: string;
+	parameterSetId: string | null;
+	notation: string;
+	request: {
+		parameters: EnergyParametersBody;
+		vary: string[];
+		links?: { id: string; to: string; ratio?: number }[];
+		bounds?: { id: string; min?: number; max?: number }[];
+		observed: (ObservedLevelBody & { levelKey?: string })[];
+		/** 'notes': the entry's annotated energies; 'typed': a list given with the request. */
+		observedFrom: 'notes' | 'typed';
+	};
+	result: FitResult;
+	rms: number;
+	degreesOfFreedom: number;
+	createdAt: string;
+	createdBy: string | null;
+}
+
 /** What restoring a project backup reports (the Projects page's restore form shows it). */
 export interface ImportReport {
 	projectId: string;
@@ -366,6 +404,15 @@ export interface ApiResponses {
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': null;
 	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId/history': { history: NoteHistoryJson[] };
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': null;
+	'GET /api/v1/projects/:projectId/shelf/:entryId/parameters': { parameterSets: ParameterSetJson[] };
+	'POST /api/v1/projects/:projectId/shelf/:entryId/parameters': { parameterSet: ParameterSetJson };
+	'GET /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': { parameterSet: ParameterSetJson };
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': { parameterSet: ParameterSetJson };
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': null;
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits': { fits: FitReportJson[] };
+	'POST /api/v1/projects/:projectId/shelf/:entryId/fits': { fit: FitReportJson };
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId': { fit: FitReportJson };
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': null;
 }
 
 export type RouteKey = keyof ApiResponses;

@@ -124,3 +124,39 @@ export const fitRequestSchema = z.object({
 		)
 		.max(API_MAX_OBSERVED, `observed holds at most ${API_MAX_OBSERVED} levels`)
 });
+
+// ---------------------------------------------------------------- parameter sets and fit reports of a Shelf entry
+
+const setName = z
+	.string({ error: 'name must be text' })
+	.trim()
+	.min(1, 'name must not be empty: give the set a name such as "fit of 12 levels"')
+	.max(120, 'name must be at most 120 characters');
+const setComment = z.string({ error: 'comment must be text' }).trim().max(2000, 'comment must be at most 2000 characters');
+
+export const parameterSetInputSchema = z.object({
+	name: setName,
+	parameters: energyParametersSchema,
+	comment: setComment.default('')
+});
+
+export const parameterSetPatchSchema = z
+	.object({
+		name: setName.optional(),
+		parameters: energyParametersSchema.optional(),
+		comment: setComment.optional(),
+		version: z.number({ error: 'version must be the number you last read' }).int('version must be an integer')
+	})
+	.refine(
+		(p) => p.name !== undefined || p.parameters !== undefined || p.comment !== undefined,
+		'send name, parameters or comment to change'
+	);
+
+/**
+ * A fit of a Shelf entry (POST …/fits): as POST /api/v1/fit without `config` (the entry's), and
+ * `observed` optional: without it, the entry's annotated observed energies are used.
+ */
+export const entryFitInputSchema = fitRequestSchema.omit({ config: true, observed: true }).extend({
+	observed: fitRequestSchema.shape.observed.optional(),
+	parameterSetId: z.string({ error: 'parameterSetId must be the id of a parameter set of this entry' }).max(40).optional()
+});

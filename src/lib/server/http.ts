@@ -124,3 +124,14 @@ export function queryParam(event: RequestEvent, name: string, maxLength = 200): 
 	if (value.length > maxLength) throw new ServiceError(400, `Query parameter "${name}" is over ${maxLength} characters`);
 	return value;
 }
+
+/** A file answer (exports): `?download` adds the attachment header with the file's name. */
+export function fileResponse(event: RequestEvent, file: { body: string; type: string; filename: string }): Response {
+	const download = event.url.searchParams.get('download') !== null;
+	return new Response(file.body, {
+		headers: {
+			'content-type': file.type,
+			...(download ? { 'content-disposition': `attachment; filename="${file.filename}"` } : {})
+		}
+	});
+}

@@ -17,7 +17,18 @@ import { eq } from 'drizzle-orm';
 import { API_ROUTES, type RouteAccess } from '$lib/api/routes';
 import type { Actor } from './access';
 import { db } from './db';
-import { apiTokens, invitations, levelAnnotationHistory, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
+import {
+	apiTokens,
+	fitReports,
+	invitations,
+	levelAnnotationHistory,
+	levelAnnotations,
+	memberships,
+	parameterSets,
+	projects,
+	shelfEntries,
+	users
+} from './db/schema';
 import { newId } from './ids';
 import { newSecret } from './secret-tokens';
 import { catchMailInTests } from './catch-mail';
@@ -232,6 +243,51 @@ function invitationIn(ctx: Ctx, email: string) {
 	return { id, token: secret };
 }
 
+/** A parameter set (version 1) on the call's entry, written directly. */
+function parameterSetIn(ctx: Ctx) {
+	const id = newId();
+	db.insert(parameterSets)
+		.values({
+			id,
+			entryId: ctx.entryId,
+			name: 'matrix set',
+			notation: '1s2 2s2 2p2',
+			parameters: { Eav: 0, F: [{ k: 2, a: '2p', b: '2p', value: 50000 }] }
+		})
+		.run();
+	return id;
+}
+
+/** A saved fit report on the call's entry, written directly. */
+function fitReportIn(ctx: Ctx) {
+	const id = newId();
+	const result = {
+		config: '2p2',
+		parameters: [{ id: 'Eav', value: 43.4, sigma: null, status: 'varied' as const }],
+		residuals: [{ J: '2', rank: 1, label: '3P', observed: 43.4, calculated: 43.4, residual: 0 }],
+		rms: 0,
+		standardDeviation: null,
+		degreesOfFreedom: 0,
+		chiSquare: 0,
+		iterations: 1,
+		converged: true,
+		method: 'matrix',
+		caution: ''
+	};
+	db.insert(fitReports)
+		.values({
+			id,
+			entryId: ctx.entryId,
+			notation: '1s2 2s2 2p2',
+			request: { parameters: {}, vary: ['Eav'], observed: [{ J: '2', energy: 43.4 }], observedFrom: 'notes' },
+			result,
+			rms: 0,
+			degreesOfFreedom: 0
+		})
+		.run();
+	return id;
+}
+
 const SAMPLES: Record<string, Sample> = {
 	'GET /api/v1/terms': { query: '?config=2p2' },
 	'GET /api/v1/jj': { query: '?config=2p2' },
@@ -249,6 +305,24 @@ const SAMPLES: Record<string, Sample> = {
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': { query: '?level=3P%231%7C2' },
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': { json: () => ({ levelKey: '3P#1|1', version: 1 }) },
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { query: '?format=csv' },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/parameters': {
+		json: () => ({ name: 'matrix set', parameters: { F: [{ k: 2, a: '2p', b: '2p', value: 50000 }], zeta: [{ shell: '2p', value: 30 }] } })
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': { params: (c) => ({ setId: parameterSetIn(c) }) },
+	'PATCH /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': {
+		params: (c) => ({ setId: parameterSetIn(c) }),
+		json: () => ({ name: 'renamed by the matrix', version: 1 })
+	},
+	'DELETE /api/v1/projects/:projectId/shelf/:entryId/parameters/:setId': {
+		params: (c) => ({ setId: parameterSetIn(c) }),
+		query: '?version=1'
+	},
+	// The fixture's one note (³P₂ at 43.4 cm⁻¹) is the observed level; one free parameter.
+	'POST /api/v1/projects/:projectId/shelf/:entryId/fits': {
+		json: () => ({ parameters: { F: [{ k: 2, a: '2p', b: '2p', value: 50000 }] }, vary: ['Eav'] })
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId': { params: (c) => ({ fitId: fitReportIn(c) }) },
+	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': { params: (c) => ({ fitId: fitReportIn(c) }), query: '?format=tex' },
 	'ACTION /signin ?/default': { form: () => ({ email: 'signin@matrix.example', password: PASSWORD }) },
 	'ACTION /signup ?/default': { form: (c) => ({ name: 'New Person', email: `new${c.n}@matrix.example`, password: PASSWORD }) },
 	'ACTION /forgot ?/default': { form: () => ({ email: 'viewer@matrix.example' }) },

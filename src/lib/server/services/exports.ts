@@ -1,7 +1,7 @@
 /**
  * Exports of a Shelf entry's annotated levels as CSV, JSON or a LaTeX table. Every format writes the
  * configuration as typed (with its core), the odd-parity mark °, the energies as typed, and lists
- * the notes detached by a configuration change after the levels.
+ * the notes detached by a configuration change after the levels. Saved fit reports export the same way.
  */
 import type { Actor } from '../access';
 import { badRequest } from '../errors';
@@ -19,6 +19,8 @@ import {
 	type ExportFormat
 } from '../../export/table';
 import { levelText } from '../../levels';
+import { fitParameterColumns, fitResidualColumns } from '../../export/fit-report';
+import { getFitReport } from './fit-reports';
 
 export function parseFormat(text: string | null): ExportFormat {
 	const format = (text ?? 'json') as ExportFormat;
@@ -64,5 +66,59 @@ export function exportAnnotatedLevels(actor: Actor, projectId: string, entryId: 
 	}
 	// Named after the notation as typed, so a core shorthand keeps the name short: Fe_II_Ar_3d6_4s.csv
 	const slug = `${entry.species || 'levels'}-${entry.notation}`.replace(/[^A-Za-z0-9]+/g, '_').replace(/^_|_$/g, '');
+	return { body, type: MIME[format], filename: `${slug}.${format}` };
+}
+
+const FIT_CAUTION =
+	'Model energies of one configuration without configuration interaction; σ are standard uncertainties from the covariance scaled by the fit’s standard deviation.';
+
+/** A saved fit report as CSV (two tables: parameters, then residuals), JSON or LaTeX (two longtables). */
+export function exportFitReport(actor: Actor, projectId: string, entryId: string, fitId: string, format: ExportFormat) {
+	const { entry, report } = getFitReport(actor, projectId, entryId, fitId);
+	const r = report.result;
+	const when = report.createdAt.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
+	const stats = `rms ${r.rms.toFixed(2)} cm⁻¹, ${r.degreesOfFreedom} degrees of freedom, ${r.residuals.length} levels`;
+	const who = `fitted by ${report.createdBy ?? 'a former member'} on ${when}`;
+	const species = entry.species ? entry.species + ' ' : '';
+	let body: string;
+	if (format === 'json') {
+		body = JSON.stringify(
+			{
+				title: entry.title,
+				species: entry.species,
+				configuration: report.notation,
+				fitted_by: report.createdBy,
+				fitted_at: report.createdAt.toISOString(),
+				observed_from: report.request.observedFrom,
+				rms_cm_1: r.rms,
+				standard_deviation_cm_1: r.standardDeviation,
+				degrees_of_freedom: r.degreesOfFreedom,
+				chi_square: r.chiSquare,
+				iterations: r.iterations,
+				converged: r.converged,
+				method: r.method,
+				note: `${FIT_CAUTION} ${r.caution}`,
+				parameters: jsonRows(r.parameters, fitParameterColumns),
+				residuals: jsonRows(r.residuals, fitResidualColumns)
+			},
+			null,
+			2
+		);
+	} else if (format === 'csv') {
+		body = `${toCsv(r.parameters, fitParameterColumns)}\r\n\r\n${toCsv(r.residuals, fitResidualColumns)}`;
+	} else {
+		const head = `${latexEscape(species)}${latexConfiguration(report.notation)} (${latexEscape(entry.title)})`;
+		const plain = (t: string) => latexEscape(t).replaceAll('cm⁻¹', 'cm$^{-1}$').replaceAll('σ', '$\\sigma$');
+		body =
+			toLatex(r.parameters, fitParameterColumns, {
+				text: '',
+				latex: `Fitted parameters of ${head}, ${plain(who)}; ${plain(stats)}. ${plain(FIT_CAUTION)}`
+			}) +
+			'\n' +
+			toLatex(r.residuals, fitResidualColumns, { text: '', latex: `Residuals of the fit of ${head}, in cm$^{-1}$; ${plain(stats)}.` });
+	}
+	const slug = `fit-${entry.species || 'levels'}-${report.notation}-${report.createdAt.toISOString().slice(0, 10)}`
+		.replace(/[^A-Za-z0-9]+/g, '_')
+		.replace(/^_|_$/g, '');
 	return { body, type: MIME[format], filename: `${slug}.${format}` };
 }
