@@ -2,7 +2,7 @@
  * Typed calls to /api/v1 from the pages. The route key names the response type (./types), so no
  * page declares or casts an API body. Failures throw `ApiError` with the server's message.
  */
-import type { ApiErrorBody, ApiRequests, ApiResponses, RouteKey } from './types';
+import type { ApiErrorBody, ApiRequests, ApiResponses, ApiWrites, RouteKey } from './types';
 
 /** A refused or failed request: the server's message, and the token or field at fault when it names one. */
 export class ApiError extends Error {
@@ -71,6 +71,21 @@ export function apiGet<K extends GetKey>(route: K, params: Params = {}, signal?:
 export function apiPost<K extends PostKey>(route: K, body: ApiRequests[K], signal?: AbortSignal): Promise<ApiResponses[K]> {
 	return send(route, apiUrl(route), {
 		method: 'POST',
+		headers: { 'content-type': 'application/json' },
+		body: JSON.stringify(body),
+		signal
+	});
+}
+
+/** Sends a project write (POST, PATCH, PUT) with its JSON body; `params` fill the path (`:projectId`, `:entryId`). */
+export function apiWrite<K extends keyof ApiWrites>(
+	route: K,
+	params: Params,
+	body: ApiWrites[K],
+	signal?: AbortSignal
+): Promise<ApiResponses[K]> {
+	return send(route, apiUrl(route, params), {
+		method: route.slice(0, route.indexOf(' ')),
 		headers: { 'content-type': 'application/json' },
 		body: JSON.stringify(body),
 		signal

@@ -355,6 +355,18 @@ export interface ApiRequests {
 	};
 }
 
+/** The JSON bodies of the project writes the pages send with `apiWrite` (./client). */
+export interface ApiWrites {
+	'POST /api/v1/projects/:projectId/shelf/:entryId/parameters': { name: string; parameters: EnergyParametersBody; comment?: string };
+	'POST /api/v1/projects/:projectId/shelf/:entryId/fits': {
+		parameters: EnergyParametersBody;
+		vary: string[];
+		/** Left out: the entry's annotated observed energies. */
+		observed?: ObservedLevelBody[];
+		parameterSetId?: string;
+	};
+}
+
 /**
  * The response body of each route, keyed "METHOD /path" exactly as in `API_ROUTES` (./routes).
  * Routes that answer 204 or a file map to `null`.

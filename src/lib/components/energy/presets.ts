@@ -15,6 +15,8 @@ export interface ParameterPreset {
 	/** Exact set of parameter ids the preset is meant for. */
 	ids: string[];
 	values: Record<string, number>;
+	/** Where the set comes from, shown beside its name (default: literature); 'saved' sets give missing ids 0, not a typical value. */
+	source?: 'literature' | 'saved';
 }
 
 /**

@@ -3,14 +3,20 @@ import type { Actions, PageServerLoad } from './$types';
 import { deleteEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
 import { pasteNotes, previewPaste } from '$lib/server/services/paste-notes';
+import { listParameterSets } from '$lib/server/services/parameter-sets';
+import { listFitReports } from '$lib/server/services/fit-reports';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { readForm, shelfFieldsFrom } from '$lib/server/forms';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
 	const { projectId, entryId } = event.params;
-	// One role check and one read of the entry: annotatedLevels returns the entry with its levels.
-	return forPage(() => annotatedLevels(user, projectId, entryId));
+	// annotatedLevels checks the role and returns the entry with its levels; the Energy solver's records follow.
+	return forPage(() => ({
+		...annotatedLevels(user, projectId, entryId),
+		parameterSets: listParameterSets(user, projectId, entryId),
+		fits: listFitReports(user, projectId, entryId)
+	}));
 };
 
 export const actions: Actions = {
