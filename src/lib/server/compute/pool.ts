@@ -88,7 +88,15 @@ export interface ComputeOptions {
 	/** Run in the pool even when the estimate says the task is light (tests). */
 	pooled?: boolean;
 	timeoutMs?: number;
+	/**
+	 * The caller gave up (the browser's Cancel, or a closed connection: SvelteKit aborts
+	 * `event.request.signal`): a waiting task leaves the queue, a running one has its thread ended.
+	 */
+	signal?: AbortSignal;
 }
+
+/** Status of a task its caller cancelled (nginx's "client closed request"; nobody reads the answer). */
+export const CANCELLED_STATUS = 499;
 
 /**
  * Runs a compute task — inline when light, otherwise in the worker pool — and returns its
@@ -107,10 +115,14 @@ export async function compute<N extends TaskName>(
 	if (!p) return inline();
 	const where = 'worker' as const;
 	const timeoutMs = options.timeoutMs ?? COMPUTE_TIMEOUT_MS;
+	if (options.signal?.aborted) return { where, status: CANCELLED_STATUS, body: errorBody('the computation was cancelled') };
+	const timeout = AbortSignal.timeout(timeoutMs);
+	const signal = options.signal ? AbortSignal.any([timeout, options.signal]) : timeout;
 	try {
-		return { ...((await p.run({ name, args }, { signal: AbortSignal.timeout(timeoutMs) })) as TaskResult), where };
+		return { ...((await p.run({ name, args }, { signal })) as TaskResult), where };
 	} catch (e) {
 		const err = e as Error;
+		if (options.signal?.aborted) return { where, status: CANCELLED_STATUS, body: errorBody('the computation was cancelled') };
 		if (err?.name === 'AbortError' || err?.name === 'TimeoutError')
 			return {
 				where,
@@ -128,7 +140,7 @@ export async function compute<N extends TaskName>(
 }
 
 /** `compute` as a JSON Response for a +server.ts handler; the header x-termwright-compute says where it ran. */
-export async function computeResponse<N extends TaskName>(name: N, args: TaskArgs<N>): Promise<Response> {
-	const r = await compute(name, args);
+export async function computeResponse<N extends TaskName>(name: N, args: TaskArgs<N>, signal?: AbortSignal): Promise<Response> {
+	const r = await compute(name, args, { signal });
 	return new Response(r.body, { status: r.status, headers: { 'content-type': 'application/json', 'x-termwright-compute': r.where } });
 }

@@ -26,6 +26,7 @@ import { evaluateSymbol, type SymbolKind } from './symbol-args';
 import { gridExtent, gridWork, seniorityWork, sheetLevelRowsBound } from '../../physics/budget';
 import { microstateTotal } from '../../physics/microstates';
 import { InputError } from '../../physics/input-error';
+import { energies, fit, sweep } from './energy-tasks';
 
 /** A finished answer: HTTP status and the JSON body as text. */
 export interface TaskResult {
@@ -170,7 +171,7 @@ const wigner: ComputeTask<{ symbol: SymbolKind; args: string[] }> = {
  * Every task by name. To add one (Energy solver, Transition finder …): write a `ComputeTask`,
  * add it here, and call `compute('name', args)` from the route (see DEVELOPERS.md).
  */
-export const TASKS = { terms, jj, bridge, basis, wigner } as const;
+export const TASKS = { terms, jj, bridge, basis, wigner, energies, sweep, fit } as const;
 
 export type TaskName = keyof typeof TASKS;
 export type TaskArgs<N extends TaskName> = Parameters<(typeof TASKS)[N]['run']>[0];

@@ -20,9 +20,9 @@ import { logActivity, type Tx } from './activity';
 import { newId } from '../ids';
 import { parseInput } from '../validation';
 import { entryFitInputSchema } from '../energy-validation';
-import { fitParameters, type FitResult } from '../../physics/fit';
+import type { FitResult } from '../../physics/fit';
 import { InputError } from '../../physics/input-error';
-import { API_LIMITS } from './energy';
+import { computeFit } from './energy';
 
 const reportColumns = {
 	id: fitReports.id,
@@ -93,21 +93,24 @@ export function prepareEntryFit(actor: Actor, projectId: string, entryId: string
 	return { entry, request, parameterSetId: data.parameterSetId ?? null };
 }
 
+/** The body of POST /api/v1/fit (the compute task `fit`) for a prepared fit. */
+export function fitRequestOf(prepared: PreparedFit) {
+	const { request } = prepared;
+	return {
+		config: prepared.entry.notation,
+		parameters: request.parameters,
+		vary: request.vary,
+		...(request.links ? { links: request.links } : {}),
+		...(request.bounds ? { bounds: request.bounds } : {}),
+		observed: request.observed.map(({ levelKey: _, ...o }) => o)
+	};
+}
+
 /** Runs a prepared fit on this thread; the engine's refusals (too few levels, unknown parameter…) become 400. */
 export function runFit(prepared: PreparedFit): FitResult {
-	const { request } = prepared;
 	try {
-		return fitParameters(
-			prepared.entry.notation,
-			{
-				parameters: request.parameters,
-				vary: request.vary,
-				links: request.links,
-				bounds: request.bounds,
-				observed: request.observed.map(({ levelKey: _, ...o }) => o)
-			},
-			{ limits: API_LIMITS }
-		);
+		const { limits: _, ...result } = computeFit(fitRequestOf(prepared));
+		return result;
 	} catch (e) {
 		if (e instanceof RangeError || e instanceof InputError) throw badRequest(e.message, { field: 'observed' });
 		throw e;
