@@ -93,3 +93,25 @@ test('an editor saves parameters with a 3d2 entry, fits its five annotated level
 	expect(refused.status()).toBe(403);
 	await shot(v, 'entry-energy-viewer');
 });
+
+test('a long computation shows its progress and a Cancel that aborts the request', async ({ page }) => {
+	// The answer is held back, so the computation is "long" however fast this machine is.
+	let asked = 0;
+	await page.route('**/api/v1/energies', async (route) => {
+		asked++;
+		await new Promise((resolve) => setTimeout(resolve, 5000));
+		await route.continue().catch(() => {});
+	});
+	const aborted = page.waitForEvent('requestfailed', (r) => r.url().endsWith('/api/v1/energies'));
+	await page.goto('/builder?config=4f7');
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	const progress = page.getByTestId('energy-progress');
+	await expect(progress).toContainText('Computing the levels of 4f7');
+	await expect(progress).toContainText(/· \d+ s/);
+	await shot(page, 'energy-progress');
+	await page.getByTestId('energy-progress-cancel').click();
+	expect((await aborted).failure()?.errorText).toMatch(/ABORTED|cancel/i);
+	await expect(progress).toHaveCount(0);
+	await expect(page.getByTestId('energy-cancelled')).toBeVisible();
+	expect(asked).toBe(1);
+});
