@@ -4,7 +4,8 @@
  * the invented demo (scripts/seed.ts), signs in, and drives a mixed workload with autocannon —
  * Shelf pages and API reads, /api/v1/terms on varied configurations, sign-ins and a few writes —
  * with 50 connections in all for `--duration` seconds (default 60). Then, for a quarter of that
- * time, heavy compute requests on 6 connections while one connection times `GET /`.
+ * time, heavy compute requests (Term sheets, jj, Energy solver levels and fits of 4f⁷) on 6 connections
+ * while one connection times `GET /`.
  *
  * Prints requests/s, p50/p95/p99 per kind of request and errors (status ≥ 400, timeouts,
  * connection errors). Targets on a 2-core machine: 0 errors, p95 < 100 ms for reads and term
@@ -53,6 +54,34 @@ const HEAVY = [
 	'/api/v1/terms?config=' + encodeURIComponent('4f7 5g5 6h5 7i3 6d3 7p'),
 	'/api/v1/wigner?symbol=9j&args=' + Array(9).fill('50').join(',')
 ];
+/**
+ * Heavy Energy solver requests (POST): all levels of 4f⁷ (3 432 determinants, about a second) and
+ * a fit of it; invented but typical parameters (cm⁻¹), as in scripts/bench-energy.ts.
+ */
+const F7_PARAMETERS = {
+	F: [
+		{ k: 2, a: '4f', b: '4f', value: 84000 },
+		{ k: 4, a: '4f', b: '4f', value: 60000 },
+		{ k: 6, a: '4f', b: '4f', value: 43000 }
+	],
+	zeta: [{ shell: '4f', value: 1500 }]
+};
+const HEAVY_POSTS = [
+	{ path: '/api/v1/energies', body: { config: '4f7', parameters: F7_PARAMETERS } },
+	{
+		path: '/api/v1/fit',
+		body: {
+			config: '4f7',
+			parameters: F7_PARAMETERS,
+			vary: ['Eav', 'zeta(4f)'],
+			observed: [
+				{ J: '7/2', energy: 0 },
+				{ J: '5/2', energy: 30000 },
+				{ J: '7/2', energy: 30500 }
+			]
+		}
+	}
+].map(({ path, body }) => ({ method: 'POST' as const, path, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) }));
 
 function startServer(): ChildProcess {
 	if (!existsSync('build/index.js')) {
@@ -204,7 +233,7 @@ try {
 	await Promise.all([
 		drive(
 			'heavy compute',
-			{ connections: 6, duration: heavySeconds, requests: HEAVY.map((path) => ({ method: 'GET', path })) },
+			{ connections: 6, duration: heavySeconds, requests: [...HEAVY.map((path) => ({ method: 'GET' as const, path })), ...HEAVY_POSTS] },
 			heavyTallies
 		),
 		drive('GET / during heavy', { connections: 1, duration: heavySeconds, requests: [{ method: 'GET', path: '/' }] }, heavyTallies)

@@ -65,7 +65,8 @@ test('an editor saves parameters with a 3d2 entry, fits its five annotated level
 	await expect(live.getByRole('table', { name: 'Fitted parameters' })).toContainText('61600.0');
 	const saved = page.getByTestId('saved-fit');
 	await expect(saved).toHaveCount(1);
-	await expect(saved).toContainText('5 levels · 2 degrees of freedom · annotated energies');
+	await expect(saved).toContainText('5 levels, the annotated energies');
+	await expect(saved).toContainText('2 degrees of freedom');
 	await shot(page, 'entry-energy-panel');
 	await saved.scrollIntoViewIfNeeded();
 	await shot(page, 'entry-fit-report');

@@ -16,8 +16,9 @@ export function latexParameter(id: string): string {
 	return latexEscape(id);
 }
 
-const cm = (v: number | null) => (v === null ? null : v.toFixed(2));
-const math = (v: number | null) => (v === null ? '--' : `$${v.toFixed(2)}$`);
+/** cm⁻¹ to 0.01; a value that rounds to zero is written 0.00, not -0.00. */
+const cm = (v: number | null) => (v === null ? null : (Math.abs(v) < 0.005 ? 0 : v).toFixed(2));
+const math = (v: number | null) => (v === null ? '--' : `$${cm(v)}$`);
 
 /** The status in words: free, fixed, or linked to another parameter at a ratio. */
 const statusText = (p: FittedParameter) =>

@@ -250,6 +250,8 @@ describe('fit report exports', () => {
 		expect(rrows[0]).toBe('J,rank_in_J,label,observed_cm-1,calculated_cm-1,obs-calc_cm-1');
 		expect(rrows).toHaveLength(6);
 		expect(rrows).toContain('0,2,1S,40000.00,40000.00,0.00');
+		// Residuals that round to zero are written 0.00, never -0.00.
+		expect(residuals).not.toContain('-0.00');
 	});
 
 	it('JSON: the statistics, who and when, and the two tables with unrounded numbers', () => {
