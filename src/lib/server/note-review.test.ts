@@ -380,22 +380,30 @@ describe('rollback: a refused or failed change leaves neither note nor history n
 });
 
 describe('awaiting review', () => {
-	it('lists the proposed notes the asker could confirm (not their own), longest waiting first, and clears on confirm', () => {
-		const mine = () => awaitingReview(rita, projectId).items.filter((i) => i.entryId === entryId);
+	it('lists proposed and disputed notes, longest waiting first, says whose they are, and clears on confirm', () => {
+		const list = (who: Actor) =>
+			awaitingReview(who, projectId)
+				.items.filter((i) => i.entryId === entryId)
+				.map((i) => [i.levelKey, i.status, i.proposedBy, i.yours, i.observedEnergyText, i.entryTitle]);
 		propose(ed, '3P#1|1', '113.2');
 		propose(ed, '1D#1|2', '20273.3');
 		propose(rita, '3P#1|2', '306.2');
 		saveAnnotation(ed, projectId, entryId, { levelKey: '1S#1|0', observedEnergy: '43185.7', status: 'disputed' });
-		expect(mine().map((i) => [i.levelKey, i.proposedBy, i.observedEnergyText, i.entryTitle])).toEqual([
-			['3P#1|1', 'Ed Itor', '113.2', 'O III ground'],
-			['1D#1|2', 'Ed Itor', '20273.3', 'O III ground']
+		saveAnnotation(ed, projectId, entryId, { levelKey: '3P#1|0', observedEnergy: '0' });
+		saveAnnotation(rita, projectId, entryId, { levelKey: '3P#1|0', observedEnergy: '0', status: 'confirmed', version: 1 });
+		expect(list(rita)).toEqual([
+			['3P#1|1', 'proposed', 'Ed Itor', false, '113.2', 'O III ground'],
+			['1D#1|2', 'proposed', 'Ed Itor', false, '20273.3', 'O III ground'],
+			['3P#1|2', 'proposed', 'Rita Reviewer', true, '306.2', 'O III ground'],
+			['1S#1|0', 'disputed', 'Ed Itor', false, '43185.7', 'O III ground']
 		]);
-		// Ed sees Rita's proposal, not his own.
-		expect(
-			awaitingReview(ed, projectId)
-				.items.filter((i) => i.entryId === entryId)
-				.map((i) => i.levelKey)
-		).toEqual(['3P#1|2']);
+		// Ed sees the same notes; his own are marked as his.
+		expect(list(ed).map(([key, , , yours]) => [key, yours])).toEqual([
+			['3P#1|1', true],
+			['1D#1|2', true],
+			['3P#1|2', false],
+			['1S#1|0', true]
+		]);
 		saveAnnotation(rita, projectId, entryId, {
 			levelKey: '3P#1|1',
 			observedEnergy: '113.2',
@@ -403,7 +411,7 @@ describe('awaiting review', () => {
 			status: 'confirmed',
 			version: 1
 		});
-		expect(mine().map((i) => i.levelKey)).toEqual(['1D#1|2']);
+		expect(list(rita).map(([key]) => key)).toEqual(['1D#1|2', '3P#1|2', '1S#1|0']);
 	});
 
 	it('detached notes wait to be reattached, not reviewed', () => {
