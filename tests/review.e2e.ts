@@ -49,6 +49,7 @@ test('an editor proposes, cannot confirm their own note, another editor confirms
 	});
 	await ed.page.getByRole('button', { name: 'Save note' }).click();
 	await expect(ed.page.getByTestId('status-error')).toContainText('You proposed this note, so you cannot confirm it yourself');
+	await shot(ed.page, 'review-own-proposal');
 	// So is a forged API call.
 	const forged = await ed.page.request.put(`/api/v1/projects/${projectId}/shelf/${entryId}/annotations`, {
 		data: { levelKey: '3P#1|1', observedEnergy: '113.2', uncertainty: '0.1', status: 'confirmed', version: 1 }
