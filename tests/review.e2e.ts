@@ -132,5 +132,17 @@ test('an editor proposes, cannot confirm their own note, another editor confirms
 	await expect(rita.page.getByTestId('awaiting-review')).toContainText('Nothing awaits review');
 	await expect(rita.page.getByTestId('awaiting-review').locator('tbody tr')).toHaveCount(0);
 
+	// New values on the confirmed note make it proposed again, by Ed: the page says so and the note waits for review again.
+	await ed.page.goto(entryUrl);
+	await ed.page.locator('tr[data-level="3P#1|1"]').getByRole('button', { name: 'Edit' }).click();
+	await ed.page.getByLabel('Observed energy (cm⁻¹)').fill('113.25');
+	await ed.page.getByRole('button', { name: 'Save note' }).click();
+	await expect(ed.page.getByTestId('note-reopened')).toContainText('its values changed, so it is proposed again');
+	await expect(ed.page.locator('tr[data-level="3P#1|1"]')).toContainText('proposed');
+	await ed.page.locator('tr[data-level="3P#1|1"]').getByRole('button', { name: 'History' }).click();
+	await expect(ed.page.getByTestId('note-history').locator('tbody tr').nth(2)).toContainText('proposed again');
+	await rita.page.goto(projectUrl);
+	await expect(rita.page.getByTestId('awaiting-review').locator('tr[data-level="3P#1|1"]')).toContainText('113.25 ± 0.1');
+
 	for (const who of [owner, ed, rita, viewer]) await who.context.close();
 });
