@@ -2,6 +2,7 @@
  * Transition finder, air/vacuum and Line matcher routes, as scripts use them (no sign-in). Check values name their sources.
  */
 import { expect, test } from '@playwright/test';
+import { newUser } from './helpers';
 
 test.describe('GET /api/v1/transitions', () => {
 	test('3s → 3p: ²S–²P° with strengths 4 : 2, i.e. 2 : 1 (Condon & Shortley 1935 ch. IX)', async ({ request }) => {
@@ -130,6 +131,23 @@ test.describe('Transition finder screen', () => {
 		await expect(page.getByTestId('finder-error')).toContainText('3s7');
 		await expect(page.getByLabel('Upper configuration')).toHaveAttribute('aria-invalid', 'true');
 		await expect(page).toHaveURL(/upper=2p\+3s7/);
+	});
+
+	test('a signed-in person is offered the configurations on their Shelves; a visitor is told to sign in', async ({ browser, page }) => {
+		await page.goto('/transitions');
+		await expect(page.getByTestId('shelf-hint')).toContainText('Sign in to pick configurations');
+		const { page: member } = await newUser(browser, 'Fina Finder', 'finder');
+		await member.getByLabel('Name').fill('Finder project');
+		await member.getByRole('button', { name: 'Create project' }).click();
+		await member.getByRole('link', { name: 'Add configuration' }).click();
+		await member.getByLabel('Title').fill('O III excited');
+		await member.getByLabel('Configuration').fill('2p 3p');
+		await member.getByRole('button', { name: 'Save to Shelf' }).click();
+		await expect(member.getByTestId('entry-title')).toHaveText('O III excited');
+		await member.goto('/transitions');
+		await expect(member.getByTestId('shelf-hint')).toContainText('the 1 configuration on your projects');
+		await expect(member.getByTestId('shelf-configs').locator('option')).toHaveAttribute('value', '2p 3p');
+		await expect(member.getByLabel('Upper configuration')).toHaveAttribute('list', 'shelf-configs');
 	});
 
 	test('is linked from the top bar', async ({ page }) => {
