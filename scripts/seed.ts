@@ -20,7 +20,15 @@ async function main() {
 		const project = createProject(ownerActor, demoProject);
 		for (const u of others) addMember(ownerActor, project.id, { email: u.email, role: u.role });
 		const entries = demoShelf.map((entry) => createEntry(ownerActor, project.id, entry));
-		for (const { entry, by, ...note } of demoNotes) saveAnnotation(actors[by], project.id, entries[entry].id, note);
+		// The review rule: a note starts as proposed; someone other than its proposer (owner ↔ editor) confirms it.
+		for (const { entry, by, status, ...note } of demoNotes) {
+			const saved = saveAnnotation(actors[by], project.id, entries[entry].id, {
+				...note,
+				status: status === 'confirmed' ? 'proposed' : status
+			});
+			if (status === 'confirmed')
+				saveAnnotation(actors[by === 0 ? 1 : 0], project.id, entries[entry].id, { ...note, status, version: saved.version });
+		}
 		console.log(`Seeded the demo project "${project.name}" with ${demoShelf.length} Shelf entries.`);
 	}
 	console.log('Demo accounts (password for all: ' + DEMO_PASSWORD + '):');

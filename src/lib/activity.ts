@@ -20,6 +20,8 @@ export const ACTIVITY_KINDS = {
 	'entry.deleted': 'deleted a Shelf entry',
 	'note.saved': 'changed a level note',
 	'note.confirmed': 'confirmed an assignment',
+	'note.disputed': 'disputed an assignment',
+	'note.reattached': 'reattached a level note',
 	'note.deleted': 'deleted a level note',
 	'invitation.sent': 'sent an invitation',
 	'invitation.revoked': 'revoked an invitation',

@@ -61,6 +61,10 @@ const LISTED: Listed = {
 		summary: 'the activity log, newest first: ?limit=50&cursor=&actor=<userId>&kind=entry.created',
 		access: 'viewer'
 	},
+	'GET /api/v1/projects/:projectId/review': {
+		summary: 'proposed and disputed level notes (yours: you proposed it, so another confirms it), longest waiting first: ?limit=50',
+		access: 'editor'
+	},
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },
 	'PATCH /api/v1/projects/:projectId': { summary: 'change name or description', access: 'owner' },
 	'DELETE /api/v1/projects/:projectId': { summary: 'delete the project', access: 'owner' },
@@ -99,6 +103,10 @@ const LISTED: Listed = {
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': {
 		summary: 'delete one note, attached or detached',
 		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId/history': {
+		summary: 'every change of one note (also of a deleted one), oldest first: values after the change, status, who, when',
+		access: 'viewer'
 	},
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' }
 };

@@ -209,6 +209,9 @@ export interface AnnotationJson {
 	uncertaintyText: string | null;
 	status: 'proposed' | 'confirmed' | 'disputed';
 	comment: string;
+	/** Who proposed the present values (name and user id); anyone but them may confirm the note. */
+	proposedBy: string | null;
+	proposedById: string | null;
 	/** True when the entry's configuration changed after the note was written; reattach or delete it. */
 	detached: boolean;
 	/** The configuration (as typed) a detached note was written for. */
@@ -216,6 +219,45 @@ export interface AnnotationJson {
 	version: number;
 	updatedAt: string;
 	updatedBy: string | null;
+}
+
+/** One change of a level note, with the note's values after it (GET …/annotations/:annotationId/history). */
+export interface NoteHistoryJson {
+	id: number;
+	/** One of NOTE_CHANGES in src/lib/review.ts: created, changed, confirmed, disputed, reopened, reattached, detached, deleted, recorded. */
+	change: string;
+	levelKey: string;
+	observedEnergyText: string | null;
+	uncertaintyText: string | null;
+	status: 'proposed' | 'confirmed' | 'disputed';
+	comment: string;
+	detached: boolean;
+	detachedFrom: string | null;
+	version: number;
+	proposedBy: string | null;
+	actorName: string;
+	createdAt: string;
+}
+
+/** A proposed or disputed note, awaiting review (GET /api/v1/projects/:projectId/review). */
+export interface ReviewItemJson {
+	id: string;
+	entryId: string;
+	entryTitle: string;
+	species: string;
+	notation: string;
+	levelKey: string;
+	observedEnergy: number | null;
+	observedEnergyText: string | null;
+	uncertainty: number | null;
+	uncertaintyText: string | null;
+	comment: string;
+	status: 'proposed' | 'disputed';
+	proposedBy: string | null;
+	/** The person asking proposed it, so cannot confirm it (review rule, src/lib/review.ts). */
+	yours: boolean;
+	updatedAt: string;
+	version: number;
 }
 
 /** Determinant budgets of one Energy solver request. */
@@ -302,6 +344,7 @@ export interface ApiResponses {
 	'POST /api/v1/projects': { project: ProjectJson };
 	'GET /api/v1/projects/:projectId/backup': null;
 	'GET /api/v1/projects/:projectId/activity': { items: ActivityJson[]; nextCursor: string | null };
+	'GET /api/v1/projects/:projectId/review': { items: ReviewItemJson[]; total: number };
 	'GET /api/v1/projects/:projectId': { project: ProjectJson };
 	'PATCH /api/v1/projects/:projectId': { project: ProjectJson };
 	'DELETE /api/v1/projects/:projectId': null;
@@ -319,10 +362,12 @@ export interface ApiResponses {
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId': { entry: ShelfEntryJson; detachedNotes: number };
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId': null;
 	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotations: AnnotationJson[] };
-	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotation: AnnotationJson };
+	/** `reopened`: the new values turned a confirmed note back to proposed (review rule, src/lib/review.ts). */
+	'PUT /api/v1/projects/:projectId/shelf/:entryId/annotations': { annotation: AnnotationJson; reopened: boolean };
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations': null;
 	'PATCH /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': { annotation: AnnotationJson };
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': null;
+	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId/history': { history: NoteHistoryJson[] };
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': null;
 }
 

@@ -12,18 +12,31 @@ import { annotatedLevels, saveAnnotation } from './services/annotations';
 import { exportAnnotatedLevels } from './services/exports';
 import { statusOf } from './status-of';
 
-let editor: Actor, viewer: Actor, projectId: string, entryId: string;
+let editor: Actor, reviewer: Actor, viewer: Actor, projectId: string, entryId: string;
 
 beforeAll(async () => {
 	editor = await signUp({ name: 'Ed Itor', email: 'ed@example.org', password: 'long-enough-pw' });
 	viewer = await signUp({ name: 'Vi Ewer', email: 'vi@example.org', password: 'long-enough-pw' });
+	reviewer = await signUp({ name: 'Rita Reviewer', email: 'rita@example.org', password: 'long-enough-pw' });
 	projectId = createProject(editor, { name: 'P' }).id;
+	addMember(editor, projectId, { email: 'rita@example.org', role: 'editor' });
 	addMember(editor, projectId, { email: 'vi@example.org', role: 'viewer' });
 });
 
 beforeEach(() => {
 	entryId = createEntry(editor, projectId, { title: 'O III ground', species: 'O III', notation: '1s2 2s2 2p2' }).id;
 });
+
+/** Another editor confirms the first note unchanged (its proposer may not: review rule, src/lib/review.ts). */
+const confirmFirst = () =>
+	saveAnnotation(reviewer, projectId, entryId, {
+		levelKey: '3P#1|1',
+		observedEnergy: 111.1,
+		uncertainty: 0.2,
+		status: 'confirmed',
+		comment: 'invented value',
+		version: 1
+	});
 
 /** An editor's first note on ³P₁ (version 1). */
 const firstNote = () =>
@@ -53,10 +66,10 @@ describe('level annotations', () => {
 
 	it('a stale version is refused and nothing changes', () => {
 		firstNote();
-		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 112, status: 'confirmed', version: 1 });
+		confirmFirst();
 		expect(statusOf(() => saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 999, version: 1 }))).toBe(409);
 		const note = annotatedLevels(viewer, projectId, entryId).levels.find((l) => l.key === '3P#1|1')!.annotation!;
-		expect(note).toMatchObject({ observedEnergy: 112, status: 'confirmed', version: 2 });
+		expect(note).toMatchObject({ observedEnergy: 111.1, status: 'confirmed', version: 2 });
 	});
 
 	it('a viewer cannot annotate; an unknown level or a bad number is a 400', () => {
@@ -68,14 +81,13 @@ describe('level annotations', () => {
 
 	it('exports the annotated levels as CSV and LaTeX', () => {
 		firstNote();
-		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: 112, status: 'confirmed', version: 1 });
+		confirmFirst();
 		const csv = exportAnnotatedLevels(viewer, projectId, entryId, 'csv').body;
 		// g(³P₁) = 3/2 (Landé formula, g_s = 2: 1 + (2 + 2 − 2)/(2·2)).
-		// The second save sent no uncertainty, so it is empty now (a save replaces the whole note).
-		expect(csv).toContain('3P J=1,3P,1,1,3/2,112,,confirmed,,Ed Itor,');
+		expect(csv).toContain('3P J=1,3P,1,1,3/2,111.1,0.2,confirmed,invented value,Rita Reviewer,');
 		const tex = exportAnnotatedLevels(viewer, projectId, entryId, 'tex');
 		expect(tex.filename).toBe('O_III_1s2_2s2_2p2.tex');
-		expect(tex.body).toContain('$^{3}\\mathrm{P}_{1}$ & $3/2$ & $112$ &  & confirmed');
-		expect(tex.body).not.toContain('Ed Itor');
+		expect(tex.body).toContain('$^{3}\\mathrm{P}_{1}$ & $3/2$ & $111.1$ & $0.2$ & confirmed');
+		expect(tex.body).not.toContain('Rita Reviewer');
 	});
 });

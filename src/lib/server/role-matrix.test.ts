@@ -17,7 +17,7 @@ import { eq } from 'drizzle-orm';
 import { API_ROUTES, type RouteAccess } from '$lib/api/routes';
 import type { Actor } from './access';
 import { db } from './db';
-import { apiTokens, invitations, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
+import { apiTokens, invitations, levelAnnotationHistory, levelAnnotations, memberships, projects, shelfEntries, users } from './db/schema';
 import { newId } from './ids';
 import { newSecret } from './secret-tokens';
 import { catchMailInTests } from './catch-mail';
@@ -177,6 +177,19 @@ function freshProject() {
 			tx.insert(memberships).values({ projectId, userId: people[who].id, role }).run();
 		tx.insert(shelfEntries).values({ id: entryId, projectId, title: 'Carbon-like ground', notation: '1s2 2s2 2p2' }).run();
 		tx.insert(levelAnnotations).values({ id: annotationId, entryId, levelKey: '3P#1|2', observedEnergy: 43.4, status: 'proposed' }).run();
+		tx.insert(levelAnnotationHistory)
+			.values({
+				annotationId,
+				projectId,
+				entryId,
+				levelKey: '3P#1|2',
+				observedEnergy: 43.4,
+				status: 'proposed',
+				version: 1,
+				change: 'created',
+				actorName: 'owner'
+			})
+			.run();
 	});
 	return { projectId, entryId, annotationId };
 }

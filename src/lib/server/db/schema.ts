@@ -5,6 +5,7 @@
 import { sql } from 'drizzle-orm';
 import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
+import { NOTE_CHANGE_NAMES, type NoteChange } from '../../review';
 
 const now = sql`(unixepoch() * 1000)`;
 
@@ -127,6 +128,11 @@ export const levelAnnotations = sqliteTable(
 		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull().default('proposed'),
 		comment: text('comment').notNull().default(''),
 		version: integer('version').notNull().default(1),
+		/**
+		 * Who proposed the note's present values (energy, uncertainty, level): the review rule
+		 * (src/lib/review.ts) lets anyone but this person confirm it.
+		 */
+		proposedBy: text('proposed_by').references(() => users.id, { onDelete: 'set null' }),
 		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
 		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
 	},
@@ -137,6 +143,43 @@ export const levelAnnotations = sqliteTable(
 			.where(sql`${t.detached} = 0`),
 		index('annotation_entry_idx').on(t.entryId, t.detached)
 	]
+);
+
+/**
+ * The history of level notes: one row per change, holding the note's fields as they were AFTER
+ * the change (a deletion keeps the last values), who made it and when, and what kind of change it
+ * was (src/lib/review.ts). Written in the transaction of the change (services/note-history.ts).
+ * `annotationId` has no foreign key on purpose: a deleted note's history stays readable. Rows go
+ * with their entry or project. `actorName` keeps the name the person had then.
+ */
+export const levelAnnotationHistory = sqliteTable(
+	'level_annotation_history',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		annotationId: text('annotation_id').notNull(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		entryId: text('entry_id')
+			.notNull()
+			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		levelKey: text('level_key').notNull(),
+		observedEnergy: real('observed_energy'),
+		observedEnergyText: text('observed_energy_text'),
+		uncertainty: real('uncertainty'),
+		uncertaintyText: text('uncertainty_text'),
+		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull(),
+		comment: text('comment').notNull().default(''),
+		detached: integer('detached', { mode: 'boolean' }).notNull().default(false),
+		detachedFrom: text('detached_from'),
+		version: integer('version').notNull(),
+		proposedBy: text('proposed_by').references(() => users.id, { onDelete: 'set null' }),
+		change: text('change', { enum: NOTE_CHANGE_NAMES as [NoteChange, ...NoteChange[]] }).notNull(),
+		actorId: text('actor_id').references(() => users.id, { onDelete: 'set null' }),
+		actorName: text('actor_name').notNull(),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('annotation_history_note_idx').on(t.annotationId, t.id), index('annotation_history_project_idx').on(t.projectId, t.id)]
 );
 
 export const MAIL_STATUSES = ['caught', 'failed'] as const;

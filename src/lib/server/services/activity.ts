@@ -153,5 +153,7 @@ export function noteSummary(
 	const energy = text(note.observedEnergy);
 	const sigma = text(note.uncertainty);
 	const value = energy ? `: ${energy}${sigma ? ` ± ${sigma}` : ''} cm⁻¹` : '';
-	return `${verb} the note on ${level} of “${entryTitle}”${value}${verb === 'confirmed' ? '' : ` (${note.status ?? 'proposed'})`}`;
+	// "confirmed …" and "disputed …" say the status already.
+	const status = verb === 'confirmed' || verb === 'disputed' ? '' : ` (${note.status ?? 'proposed'})`;
+	return `${verb} the note on ${level} of “${entryTitle}”${value}${status}`;
 }

@@ -2,6 +2,9 @@
  * Per-level annotations of a Shelf entry: observed energy with uncertainty, assignment status
  * and a comment, with who changed them and when. Viewers read; editors write. An edit based on
  * an old version is refused (409), so two people cannot overwrite each other unknowingly.
+ * Statuses follow the review rule of src/lib/review.ts (nobody confirms their own proposal).
+ * Every change writes its history row (note-history.ts) and its activity log line in the
+ * transaction of the change.
  */
 import { and, eq, sql } from 'drizzle-orm';
 import { db } from '../db';
@@ -9,7 +12,8 @@ import { levelAnnotations, users } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, notFound, ServiceError } from '../errors';
 import { entryWarnings, readEntry } from './shelf';
-import { logActivity, noteSummary } from './activity';
+import { logActivity, noteSummary, type Tx } from './activity';
+import { recordNoteChange } from './note-history';
 import { newId } from '../ids';
 import { RecentMap } from '../recent';
 import { annotationInputSchema, parseInput, reattachSchema } from '../validation';
@@ -18,6 +22,8 @@ import { termSheet, type TermSheet } from '../../physics/report';
 import { BudgetError } from '../../physics/budget';
 import { levelKey, levelRefs, levelText } from '../../levels';
 import { numberText } from '../../energyText';
+import { reviewOutcome, type NoteChange } from '../../review';
+import type { ActivityKind } from '../../activity';
 
 const annotationColumns = {
 	id: levelAnnotations.id,
@@ -32,7 +38,9 @@ const annotationColumns = {
 	detachedFrom: levelAnnotations.detachedFrom,
 	version: levelAnnotations.version,
 	updatedAt: levelAnnotations.updatedAt,
-	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.updatedBy})`
+	updatedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.updatedBy})`,
+	proposedById: levelAnnotations.proposedBy,
+	proposedBy: sql<string | null>`(select name from ${users} where ${users.id} = ${levelAnnotations.proposedBy})`
 };
 
 type AnnotationRow = {
@@ -43,7 +51,7 @@ type AnnotationRow = {
 };
 
 /** Notes saved before the text was kept have only the number; their text is its shortest decimal. */
-function withTexts<R extends AnnotationRow>(a: R): R & { observedEnergyText: string | null; uncertaintyText: string | null } {
+export function withTexts<R extends AnnotationRow>(a: R): R & { observedEnergyText: string | null; uncertaintyText: string | null } {
 	return {
 		...a,
 		observedEnergyText: a.observedEnergyText ?? (a.observedEnergy === null ? null : numberText(a.observedEnergy)),
@@ -143,6 +151,57 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 	return { entry, sheet, levels, detached, warnings: entryWarnings(entry) };
 }
 
+/** Changes made through this module (detaching is done by a change of the entry's configuration, in shelf.ts). */
+type NoteEdit = Exclude<NoteChange, 'detached' | 'recorded'>;
+
+/** The activity kind and the verb of its summary for a kind of note change. */
+const NOTE_ACTIVITY: Record<NoteEdit, { kind: ActivityKind; verb: string }> = {
+	created: { kind: 'note.saved', verb: 'added' },
+	changed: { kind: 'note.saved', verb: 'changed' },
+	reopened: { kind: 'note.saved', verb: 'changed' },
+	confirmed: { kind: 'note.confirmed', verb: 'confirmed' },
+	disputed: { kind: 'note.disputed', verb: 'disputed' },
+	reattached: { kind: 'note.reattached', verb: 'reattached' },
+	deleted: { kind: 'note.deleted', verb: 'deleted' }
+};
+
+type NoteRow = typeof levelAnnotations.$inferSelect;
+
+/**
+ * The history row and the activity line of one change to a note, with the transaction of the change.
+ * `verb` replaces the summary's usual verb for the change ("pasted" instead of "added").
+ */
+export function recordChange(
+	tx: Tx,
+	actor: Actor,
+	projectId: string,
+	entry: { id: string; title: string },
+	note: NoteRow,
+	change: NoteEdit,
+	verb = NOTE_ACTIVITY[change].verb
+) {
+	recordNoteChange(tx, projectId, note, change, actor);
+	const { kind } = NOTE_ACTIVITY[change];
+	const values = { observedEnergy: note.observedEnergyText ?? note.observedEnergy, uncertainty: note.uncertaintyText ?? note.uncertainty };
+	const summary =
+		change === 'deleted'
+			? `deleted the note on ${levelText(note.levelKey)} of “${entry.title}”`
+			: noteSummary(verb, levelText(note.levelKey), entry.title, {
+					...values,
+					status: change === 'reopened' ? 'proposed again: its values changed' : note.status
+				});
+	logActivity(tx, { projectId, actor, kind, summary, subject: `entry:${entry.id}` });
+}
+
+/** The digits a note holds (notes saved before the digits were kept: the shortest decimal of the number). */
+export const digits = (value: number | null, text: string | null) => text ?? (value === null ? null : numberText(value));
+
+/**
+ * Creates or changes the note on one level. The review rule (src/lib/review.ts) decides the
+ * status: a new note cannot be confirmed (400); its proposer cannot confirm it (403); new values
+ * make the saver the proposer and a confirmed note proposed again. The answer's `reopened` says
+ * when that happened.
+ */
 export function saveAnnotation(actor: Actor, projectId: string, entryId: string, input: unknown) {
 	projectAccess(actor, projectId, 'editor');
 	const data = parseInput(annotationInputSchema, input);
@@ -150,44 +209,45 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 	checkKnownLevel(entry, data.levelKey);
 	return db.transaction((tx) => {
 		const current = tx.select().from(levelAnnotations).where(attachedOn(entryId, data.levelKey)).get();
+		if (current && data.version === undefined)
+			throw conflict(`The level ${levelText(data.levelKey)} already has a note; send the version you last read to change it`, {
+				currentVersion: current.version
+			});
+		if (current && data.version !== current.version)
+			throw conflict(
+				`The note on ${levelText(data.levelKey)} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
+				{ currentVersion: current.version }
+			);
 		const values = {
 			observedEnergy: data.observedEnergy?.value ?? null,
 			observedEnergyText: data.observedEnergy?.text ?? null,
 			uncertainty: data.uncertainty?.value ?? null,
 			uncertaintyText: data.uncertainty?.text ?? null,
-			status: data.status,
 			comment: data.comment,
 			updatedBy: actor.id,
 			updatedAt: new Date()
 		};
+		const valuesChanged =
+			!current ||
+			digits(current.observedEnergy, current.observedEnergyText) !== values.observedEnergyText ||
+			digits(current.uncertainty, current.uncertaintyText) !== values.uncertaintyText;
+		const review = reviewOutcome(current ?? null, data.status, valuesChanged, actor.id);
+		if (!review.ok) throw new ServiceError(review.status, review.message, { field: 'status' });
+		const reviewed = { status: review.status, proposedBy: review.proposedBy };
 		if (!current) {
 			tx.insert(levelAnnotations)
-				.values({ id: newId(), entryId, levelKey: data.levelKey, ...values })
+				.values({ id: newId(), entryId, levelKey: data.levelKey, ...values, ...reviewed })
 				.run();
 		} else {
-			if (data.version !== undefined && data.version !== current.version)
-				throw conflict(
-					`The note on ${levelText(data.levelKey)} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
-					{ currentVersion: current.version }
-				);
-			if (data.version === undefined)
-				throw conflict(`The level ${levelText(data.levelKey)} already has a note; send the version you last read to change it`, {
-					currentVersion: current.version
-				});
 			tx.update(levelAnnotations)
-				.set({ ...values, version: current.version + 1 })
+				.set({ ...values, ...reviewed, version: current.version + 1 })
 				.where(eq(levelAnnotations.id, current.id))
 				.run();
 		}
-		const confirmed = data.status === 'confirmed' && current?.status !== 'confirmed';
-		logActivity(tx, {
-			projectId,
-			actor,
-			kind: confirmed ? 'note.confirmed' : 'note.saved',
-			summary: noteSummary(confirmed ? 'confirmed' : current ? 'changed' : 'added', levelText(data.levelKey), entry.title, data),
-			subject: `entry:${entryId}`
-		});
-		return withTexts(tx.select(annotationColumns).from(levelAnnotations).where(attachedOn(entryId, data.levelKey)).get()!);
+		const saved = tx.select().from(levelAnnotations).where(attachedOn(entryId, data.levelKey)).get()!;
+		recordChange(tx, actor, projectId, entry, saved, review.change);
+		const note = withTexts(tx.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.id, saved.id)).get()!);
+		return { ...note, reopened: review.reopened };
 	});
 }
 
@@ -196,20 +256,15 @@ export function deleteAnnotation(actor: Actor, projectId: string, entryId: strin
 	projectAccess(actor, projectId, 'editor');
 	const entry = readEntry(projectId, entryId);
 	db.transaction((tx) => {
-		const result = tx.delete(levelAnnotations).where(attachedOn(entryId, levelKeyText)).run();
-		if (result.changes === 0) throw notFound(`No note on ${levelKeyText}`);
-		logActivity(tx, {
-			projectId,
-			actor,
-			kind: 'note.deleted',
-			summary: `deleted the note on ${levelText(levelKeyText)} of “${entry.title}”`,
-			subject: `entry:${entryId}`
-		});
+		const note = tx.select().from(levelAnnotations).where(attachedOn(entryId, levelKeyText)).get();
+		if (!note) throw notFound(`No note on ${levelKeyText}`);
+		tx.delete(levelAnnotations).where(eq(levelAnnotations.id, note.id)).run();
+		recordChange(tx, actor, projectId, entry, note, 'deleted');
 	});
 }
 
-function noteById(entryId: string, annotationId: string) {
-	const note = db
+function noteById(tx: Tx, entryId: string, annotationId: string) {
+	const note = tx
 		.select()
 		.from(levelAnnotations)
 		.where(and(eq(levelAnnotations.id, annotationId), eq(levelAnnotations.entryId, entryId)))
@@ -221,15 +276,20 @@ function noteById(entryId: string, annotationId: string) {
 /** Deletes one note (attached or detached) by its id. */
 export function deleteAnnotationById(actor: Actor, projectId: string, entryId: string, annotationId: string) {
 	projectAccess(actor, projectId, 'editor');
-	readEntry(projectId, entryId);
-	noteById(entryId, annotationId);
-	db.delete(levelAnnotations).where(eq(levelAnnotations.id, annotationId)).run();
+	const entry = readEntry(projectId, entryId);
+	db.transaction((tx) => {
+		const note = noteById(tx, entryId, annotationId);
+		tx.delete(levelAnnotations).where(eq(levelAnnotations.id, annotationId)).run();
+		recordChange(tx, actor, projectId, entry, note, 'deleted');
+	});
 }
 
 /**
  * Attaches a note (usually a detached one) to a level of the entry's present configuration.
  * Input: { levelKey, version } with the note's version as last read (409 when stale). Refused
  * (409) when that level already has an attached note: delete or move that one first.
+ * Putting the note on a level is proposing that its energy belongs there, so the person who
+ * reattaches becomes its proposer and a confirmed note is proposed again (src/lib/review.ts).
  */
 export function reattachAnnotation(actor: Actor, projectId: string, entryId: string, annotationId: string, input: unknown) {
 	projectAccess(actor, projectId, 'editor');
@@ -237,7 +297,7 @@ export function reattachAnnotation(actor: Actor, projectId: string, entryId: str
 	const entry = readEntry(projectId, entryId);
 	checkKnownLevel(entry, data.levelKey);
 	return db.transaction((tx) => {
-		const note = noteById(entryId, annotationId);
+		const note = noteById(tx, entryId, annotationId);
 		if (note.version !== data.version)
 			throw conflict(
 				`This note was changed by someone else since you opened it (you had version ${data.version}, it is now ${note.version}); reload and try again`,
@@ -254,11 +314,15 @@ export function reattachAnnotation(actor: Actor, projectId: string, entryId: str
 				detached: false,
 				detachedFrom: null,
 				version: note.version + 1,
+				status: note.status === 'confirmed' ? 'proposed' : note.status,
+				proposedBy: actor.id,
 				updatedBy: actor.id,
 				updatedAt: new Date()
 			})
 			.where(eq(levelAnnotations.id, annotationId))
 			.run();
+		const saved = noteById(tx, entryId, annotationId);
+		recordChange(tx, actor, projectId, entry, saved, 'reattached');
 		return withTexts(tx.select(annotationColumns).from(levelAnnotations).where(eq(levelAnnotations.id, annotationId)).get()!);
 	});
 }

@@ -2,7 +2,8 @@
  * Backup and restore of one project as a single versioned JSON file.
  *
  * `exportProject` (owners only) writes everything the project holds: its name and description,
- * the members' roles by e-mail, every Shelf entry with its level notes, and the activity log.
+ * the members' roles by e-mail, every Shelf entry with its level notes, the notes' history (the
+ * `noteHistory` section, services/note-history.ts) and the activity log.
  * People are written by e-mail, never by id, so a file restores on another server.
  *
  * `importProject` reads such a file into a NEW project owned by the importer, in one transaction:
@@ -43,11 +44,15 @@ import { newId } from '../ids';
 import { logActivity, type Tx } from './activity';
 import { libraryColumns } from './shelf-library';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
+import { noteHistorySection, recordUntrackedNotes } from './note-history';
 
 /** What the file says it is. */
 export const BACKUP_FORMAT = 'termwright-project';
-/** The newest format version this server writes and reads. */
-export const BACKUP_VERSION = 1;
+/**
+ * The newest format version this server writes; it reads every version from 1.
+ * 2: level notes carry `ref` (their id, which the note history refers to) and `proposedBy`.
+ */
+export const BACKUP_VERSION = 2;
 /** Largest file the import reads, in bytes. */
 export const BACKUP_MAX_BYTES = 16 * 1024 * 1024;
 
@@ -58,6 +63,8 @@ export interface BackupContext {
 	userIdOf(email: string | null): string | null;
 	/** Old entry id (as in the file) → new entry id; filled before the sections restore. */
 	entryIds: Map<string, string>;
+	/** Old note id (a level note's `ref`) → new note id; filled before the sections restore. */
+	noteIds: Map<string, string>;
 }
 
 /** A part of the file written and read by another feature (see the comment at the top). */
@@ -70,8 +77,8 @@ export interface BackupSection<T> {
 	restore(tx: Tx, data: T, ctx: BackupContext): void;
 }
 
-/** Sections other features register. Empty until the Energy solver, Line matcher and uploads join. */
-export const BACKUP_SECTIONS: BackupSection<unknown>[] = [];
+/** Sections other features register (the Energy solver, Line matcher and uploads join here). */
+export const BACKUP_SECTIONS: BackupSection<unknown>[] = [noteHistorySection as BackupSection<unknown>];
 
 // ------------------------------------------------------------------------------------------ file shape
 
@@ -80,6 +87,8 @@ const email = z.string().max(254).nullable();
 const text = (max: number) => z.string().max(max, `must be at most ${max} characters`);
 
 const noteSchema = z.strictObject({
+	/** The note's id on the server that wrote the file; the note history refers to it (version 2 on). */
+	ref: text(64).optional(),
 	levelKey: text(80),
 	observedEnergy: z.number().finite().nullable(),
 	/** The digits as typed; files written before they were kept have none. */
@@ -92,6 +101,8 @@ const noteSchema = z.strictObject({
 	status: z.enum(ASSIGNMENT_STATUSES),
 	comment: text(10000),
 	version: z.number().int().positive(),
+	/** Who proposed the note's values (version 2 on); files of version 1 have none: the last to change it is taken. */
+	proposedBy: email.optional(),
 	updatedBy: email,
 	updatedAt: isoDate
 });
@@ -124,7 +135,7 @@ const activitySchema = z.strictObject({
 
 const backupSchema = z.strictObject({
 	format: z.literal(BACKUP_FORMAT),
-	version: z.literal(BACKUP_VERSION),
+	version: z.number().int().min(1).max(BACKUP_VERSION),
 	exportedAt: isoDate,
 	exportedBy: email,
 	project: z.strictObject({ name: text(120).min(1), description: text(2000), createdBy: email, createdAt: isoDate, updatedAt: isoDate }),
@@ -154,7 +165,8 @@ function makeContext(projectId: string): BackupContext {
 			if (!ids.has(key)) ids.set(key, db.select({ id: users.id }).from(users).where(eq(users.email, key)).get()?.id ?? null);
 			return ids.get(key)!;
 		},
-		entryIds: new Map()
+		entryIds: new Map(),
+		noteIds: new Map()
 	};
 }
 
@@ -243,8 +255,10 @@ export function exportProject(actor: Actor, projectId: string): ProjectBackup {
 				updatedAt: iso(e.updatedAt),
 				levelNotes: notes
 					.filter((n) => n.entryId === e.id)
-					.map(({ id: _id, entryId: _entry, updatedBy, updatedAt, ...n }) => ({
+					.map(({ id, entryId: _entry, proposedBy, updatedBy, updatedAt, ...n }) => ({
+						ref: id,
 						...n,
+						proposedBy: ctx.emailOf(proposedBy),
 						updatedBy: ctx.emailOf(updatedBy),
 						updatedAt: iso(updatedAt)
 					}))
@@ -354,9 +368,18 @@ export function importProject(actor: Actor, fileText: string): ImportReport {
 					updatedBy: ctx.userIdOf(updatedBy)
 				})
 				.run();
-			for (const n of notes) {
+			for (const { ref, proposedBy, ...n } of notes) {
+				const noteId = newId();
+				if (ref) ctx.noteIds.set(ref, noteId);
+				const updatedBy = ctx.userIdOf(n.updatedBy);
 				tx.insert(levelAnnotations)
-					.values({ ...n, id: newId(), entryId: id, updatedBy: ctx.userIdOf(n.updatedBy) })
+					.values({
+						...n,
+						id: noteId,
+						entryId: id,
+						updatedBy,
+						proposedBy: proposedBy === undefined ? updatedBy : ctx.userIdOf(proposedBy)
+					})
 					.run();
 				levelNotes++;
 			}
@@ -381,6 +404,8 @@ export function importProject(actor: Actor, fileText: string): ImportReport {
 				throw badRequest(`The backup's ${s.label} are damaged: ${parsed.error.issues[0]?.message}. Nothing was imported.`);
 			s.restore(tx, parsed.data, ctx);
 		}
+		// A file of format 1 has no note history: each note's history starts with its state in the file.
+		recordUntrackedNotes(tx, projectId);
 		const lost = notRestored.length
 			? `; ${notRestored.length} member${notRestored.length === 1 ? '' : 's'} without an account here not restored`
 			: '';

@@ -10,6 +10,7 @@ import { badRequest, conflict, notFound } from '../errors';
 import { newId } from '../ids';
 import { parseInput, shelfInputSchema, shelfPatchSchema } from '../validation';
 import { changedFields, logActivity } from './activity';
+import { recordNoteChange } from './note-history';
 import {
 	afterCursor,
 	decodeCursor,
@@ -227,13 +228,17 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 		// A different configuration: every attached note is kept but detached until someone
 		// reattaches it to a level of the new configuration or deletes it (never hidden or moved).
 		const after = { notation: data.notation ?? current.notation, species: data.species ?? current.species };
-		const detachedNotes = keepsConfiguration(current, after)
-			? 0
-			: db
+		// Each detached note's history records it (note-history.ts).
+		const detached = keepsConfiguration(current, after)
+			? []
+			: tx
 					.update(levelAnnotations)
 					.set({ detached: true, detachedFrom: current.notation })
 					.where(and(eq(levelAnnotations.entryId, entryId), eq(levelAnnotations.detached, false)))
-					.run().changes;
+					.returning()
+					.all();
+		for (const note of detached) recordNoteChange(tx, projectId, note, 'detached', actor);
+		const detachedNotes = detached.length;
 		db.update(shelfEntries)
 			.set({
 				...data,
@@ -248,7 +253,7 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 			projectId,
 			actor,
 			kind: 'entry.updated',
-			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”`,
+			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”${detachedNotes ? ` (${detachedNotes} level note${detachedNotes === 1 ? '' : 's'} detached)` : ''}`,
 			subject: `entry:${entryId}`
 		});
 		const entry = readEntry(projectId, entryId);

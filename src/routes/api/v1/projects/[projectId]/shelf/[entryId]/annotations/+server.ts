@@ -10,13 +10,13 @@ export const GET: RequestHandler = api((event) =>
 
 /**
  * Creates or changes the note on one level. Body: { levelKey, observedEnergy, uncertainty, status, comment, version? };
- * changing an existing note needs the version you read (409 when stale).
+ * changing an existing note needs the version you read (409 when stale). The review rule
+ * (src/lib/review.ts): a new note cannot be confirmed (400), nor a note by its proposer (403).
  */
 export const PUT: RequestHandler = api(async (event) => {
 	const actor = apiActor(event);
-	return reply('PUT /api/v1/projects/:projectId/shelf/:entryId/annotations', {
-		annotation: saveAnnotation(actor, event.params.projectId, event.params.entryId, await readJson(event))
-	});
+	const { reopened, ...annotation } = saveAnnotation(actor, event.params.projectId, event.params.entryId, await readJson(event));
+	return reply('PUT /api/v1/projects/:projectId/shelf/:entryId/annotations', { annotation, reopened });
 });
 
 /** `?level=<levelKey>` */
