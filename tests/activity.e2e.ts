@@ -1,25 +1,14 @@
 import { expect, test } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, newUser, shot } from './helpers';
 
 test('the project Activity page lists each change, filters by kind and person, and viewers read it', async ({ browser }) => {
 	const owner = await newUser(browser, 'Alma Owner', 'activity-owner');
 	const { page } = owner;
-	await page.getByLabel('Name').fill('Log of a nebula');
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Log of a nebula' })).toBeVisible();
-	const projectUrl = page.url();
-
-	await page.getByRole('link', { name: 'Add configuration' }).click();
-	await page.getByLabel('Title').fill('O III ground');
-	await page.getByLabel('Configuration').fill('1s2 2s2 2p2');
-	await page.getByRole('button', { name: 'Save to Shelf' }).click();
-	await expect(page.getByTestId('entry-title')).toHaveText('O III ground');
+	const { projectUrl } = await createProject(page, 'Log of a nebula');
+	await addEntry(page, projectUrl, { title: 'O III ground', notation: '1s2 2s2 2p2' });
 
 	const viewer = await newUser(browser, 'Vito Viewer', 'activity-viewer');
-	await page.goto(`${projectUrl}/members`);
-	await page.getByLabel('E-mail of their account').fill(viewer.email);
-	await page.getByRole('button', { name: 'Add' }).click();
-	await expect(page.getByTestId('member-list')).toContainText('Vito Viewer');
+	await addMember(page, projectUrl, { email: viewer.email, name: 'Vito Viewer' }, 'viewer');
 
 	await page.getByRole('link', { name: 'Activity' }).click();
 	const log = page.getByRole('table', { name: 'Activity log' });

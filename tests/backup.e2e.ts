@@ -1,25 +1,18 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync, writeFileSync } from 'node:fs';
-import { newUser, shot } from './helpers';
+import { addEntry, createProject, newUser, shot } from './helpers';
 
 test('an owner downloads a project backup and restores it as a new project; a damaged file is refused', async ({ browser }, info) => {
 	const { page } = await newUser(browser, 'Bea Backup', 'backup-owner');
-	await page.getByLabel('Name').fill('Archive me');
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Archive me' })).toBeVisible();
-	const projectUrl = page.url();
-	await page.getByRole('link', { name: 'Add configuration' }).click();
-	await page.getByLabel('Title').fill('N II ground');
-	await page.getByLabel('Configuration').fill('1s2 2s2 2p2');
-	await page.getByRole('button', { name: 'Save to Shelf' }).click();
-	await expect(page.getByTestId('entry-title')).toHaveText('N II ground');
+	const { projectUrl } = await createProject(page, 'Archive me');
+	await addEntry(page, projectUrl, { title: 'N II ground', notation: '1s2 2s2 2p2' });
 
 	await page.goto(projectUrl);
 	const download = page.waitForEvent('download');
 	await page.getByRole('link', { name: 'Download backup' }).click();
 	const file = await (await download).path();
 	const backup = JSON.parse(readFileSync(file!, 'utf8'));
-	expect(backup).toMatchObject({ format: 'termwright-project', version: 1, project: { name: 'Archive me' } });
+	expect(backup).toMatchObject({ format: 'termwright-project', version: 2, project: { name: 'Archive me' } });
 	expect(backup.entries.map((e: { title: string }) => e.title)).toEqual(['N II ground']);
 
 	// A damaged copy (cut short) is refused with a message; nothing is created.

@@ -71,3 +71,45 @@ export function linkPath(mail: CaughtMail, kind: 'reset' | 'invite'): string {
 	if (!link) throw new Error(`no ${kind} link in the mail to ${mail.to}`);
 	return new URL(link).pathname;
 }
+
+/** Creates a project from the Projects page (where sign-up lands) and opens it. */
+export async function createProject(page: Page, name: string) {
+	await page.goto('/projects');
+	await page.getByLabel('Name').fill(name);
+	await page.getByRole('button', { name: 'Create project' }).click();
+	await expect(page.getByRole('heading', { name })).toBeVisible();
+	const projectUrl = page.url();
+	return { projectUrl, projectId: projectUrl.split('/').pop()! };
+}
+
+/** Adds a Shelf entry from the project's page and opens it. */
+export async function addEntry(
+	page: Page,
+	projectUrl: string,
+	entry: { title: string; notation: string; species?: string; tags?: string }
+) {
+	await page.goto(projectUrl);
+	await page.getByRole('link', { name: 'Add configuration' }).click();
+	await page.getByLabel('Title').fill(entry.title);
+	await page.getByLabel('Configuration').fill(entry.notation);
+	if (entry.species !== undefined) await page.getByLabel('Species').fill(entry.species);
+	if (entry.tags !== undefined) await page.getByLabel('Tags (comma separated)').fill(entry.tags);
+	await page.getByRole('button', { name: 'Save to Shelf' }).click();
+	await expect(page.getByTestId('entry-title')).toHaveText(entry.title);
+	const entryUrl = page.url();
+	return { entryUrl, entryId: entryUrl.split('/').pop()! };
+}
+
+/** An owner adds an existing account to the project with a role, on the Members page. */
+export async function addMember(
+	page: Page,
+	projectUrl: string,
+	member: { email: string; name: string },
+	role: 'viewer' | 'editor' | 'owner'
+) {
+	await page.goto(`${projectUrl}/members`);
+	await page.getByLabel('E-mail of their account').fill(member.email);
+	await page.locator('form[action="?/add"] select[name=role]').selectOption(role);
+	await page.getByRole('button', { name: 'Add or invite' }).click();
+	await expect(page.getByTestId('member-list')).toContainText(member.name);
+}

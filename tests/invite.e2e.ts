@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { PASSWORD, caughtMailTo, linkPath, newUser, shot, uniqueEmail } from './helpers';
+import { PASSWORD, addEntry, caughtMailTo, createProject, linkPath, newUser, shot, uniqueEmail } from './helpers';
 
 /**
  * Invitations and mail through the local SMTP catcher, in the built app: an owner invites a
@@ -10,16 +10,9 @@ import { PASSWORD, caughtMailTo, linkPath, newUser, shot, uniqueEmail } from './
  */
 
 async function projectWithEntry(page: Page, name: string) {
-	await page.getByLabel('Name').fill(name);
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name })).toBeVisible();
-	const projectUrl = page.url();
-	await page.getByRole('link', { name: 'Add configuration' }).click();
-	await page.getByLabel('Title').fill('Nitrogen-like ground');
-	await page.getByLabel('Configuration').fill('1s2 2s2 2p3');
-	await page.getByRole('button', { name: 'Save to Shelf' }).click();
-	await expect(page.getByTestId('entry-title')).toHaveText('Nitrogen-like ground');
-	return { projectUrl, projectId: projectUrl.split('/').pop()!, entryUrl: page.url() };
+	const { projectUrl, projectId } = await createProject(page, name);
+	const { entryUrl } = await addEntry(page, projectUrl, { title: 'Nitrogen-like ground', notation: '1s2 2s2 2p3' });
+	return { projectUrl, projectId, entryUrl };
 }
 
 async function invite(page: Page, projectUrl: string, email: string, role: 'viewer' | 'editor' | 'owner') {

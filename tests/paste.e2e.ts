@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { addMember, createProject, newUser, shot } from './helpers';
 
 /**
  * Pasting a column of observed energies on a Shelf entry: the preview says line by line where each
@@ -9,10 +9,7 @@ import { newUser, shot } from './helpers';
  */
 test('paste → preview → save; a refused line saves nothing; viewers have no paste tool', async ({ browser }) => {
 	const { context, page } = await newUser(browser, 'Pia Paste', 'paste');
-	await page.getByLabel('Name').fill('Nebula paste');
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Nebula paste' })).toBeVisible();
-	const projectId = page.url().split('/').pop()!;
+	const { projectId } = await createProject(page, 'Nebula paste');
 	const created = await page.request.post(`/api/v1/projects/${projectId}/shelf`, {
 		data: { title: 'O III ground', species: 'O III', notation: '2p2' }
 	});
@@ -47,7 +44,9 @@ test('paste → preview → save; a refused line saves nothing; viewers have no 
 	await page.getByLabel(/One level per line/).fill('0  3P0\n16.4 3P1 ±0.2\n43.5  J=2 3P2\n15867.9 1D2 "new plate"');
 	await expect(page.getByTestId('paste-summary')).toContainText('4 of 4 lines go to a level.');
 	await page.getByRole('button', { name: 'Save 4 notes' }).click();
-	await expect(page.getByTestId('paste-saved')).toContainText('Saved 4 notes (1 replaced), as proposed.');
+	await expect(page.getByTestId('paste-saved')).toContainText(
+		'Saved 4 notes (1 replaced); new values are proposed, for an owner or another editor to confirm.'
+	);
 	await expect(page.locator('tr[data-level="3P#1|1"]')).toContainText('16.4');
 	await expect(page.locator('tr[data-level="3P#1|1"]')).toContainText('0.2');
 	await expect(page.locator('tr[data-level="1D#1|2"]')).toContainText('15867.9');
@@ -55,6 +54,15 @@ test('paste → preview → save; a refused line saves nothing; viewers have no 
 	await expect(page.locator('tr[data-level="1D#1|2"]')).toContainText('new plate');
 	await expect(page.getByLabel(/One level per line/)).toHaveValue('');
 	await shot(page, 'paste-saved-1280');
+	// The paste is in the note's history, by the person who pasted, after the note it replaced.
+	await page.locator('tr[data-level="1D#1|2"]').getByRole('button', { name: 'History' }).click();
+	const history = page.getByTestId('note-history');
+	await expect(history.locator('tbody tr')).toHaveCount(2);
+	await expect(history.locator('tbody tr').nth(0)).toContainText('created');
+	await expect(history.locator('tbody tr').nth(1)).toContainText('changed');
+	await expect(history.locator('tbody tr').nth(1)).toContainText('15867.9 cm⁻¹');
+	await expect(history.locator('tbody tr').nth(1)).toContainText('Pia Paste');
+	await page.locator('tr[data-level="1D#1|2"]').getByRole('button', { name: 'History' }).click();
 
 	// The same paste again, but someone changes ³P₁ after the preview: the save is refused whole.
 	await page.getByLabel(/One level per line/).fill('1 3P0\n16.5 3P1');
@@ -70,10 +78,7 @@ test('paste → preview → save; a refused line saves nothing; viewers have no 
 
 	// A viewer has no paste tool.
 	const viewer = await newUser(browser, 'Vic Viewer', 'paste-viewer');
-	await page.goto(`/projects/${projectId}/members`);
-	await page.getByLabel('E-mail of their account').fill(viewer.email);
-	await page.getByRole('button', { name: 'Add' }).click();
-	await expect(page.getByTestId('member-list')).toContainText('Vic Viewer');
+	await addMember(page, `/projects/${projectId}`, { email: viewer.email, name: 'Vic Viewer' }, 'viewer');
 	await viewer.page.goto(entryUrl);
 	await expect(viewer.page.locator('tr[data-level="1D#1|2"]')).toContainText('15867.9');
 	await expect(viewer.page.getByTestId('paste-energies')).toHaveCount(0);

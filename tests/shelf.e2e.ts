@@ -1,37 +1,43 @@
 import { expect, test } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, newUser, shot } from './helpers';
 
 test('annotate a level on the Shelf, reload, export; viewers cannot annotate; stale notes are refused', async ({ browser }) => {
 	const owner = await newUser(browser, 'Ola Owner', 'shelf-owner');
 	const { page } = owner;
-	await page.getByLabel('Name').fill('Peculiar star');
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Peculiar star' })).toBeVisible();
-	const projectUrl = page.url();
-	const projectId = projectUrl.split('/').pop()!;
-
-	await page.getByRole('link', { name: 'Add configuration' }).click();
-	await page.getByLabel('Title').fill('Iron II ground configuration');
-	await page.getByLabel('Configuration').fill('[Ar] 3d6 4s');
-	await page.getByLabel('Species').fill('Fe II');
-	await page.getByLabel('Tags (comma separated)').fill('iron group, test');
-	await page.getByRole('button', { name: 'Save to Shelf' }).click();
-	await expect(page.getByTestId('entry-title')).toHaveText('Iron II ground configuration');
-	const entryUrl = page.url();
-	const entryId = entryUrl.split('/').pop()!;
+	const { projectUrl, projectId } = await createProject(page, 'Peculiar star');
+	const { entryUrl, entryId } = await addEntry(page, projectUrl, {
+		title: 'Iron II ground configuration',
+		notation: '[Ar] 3d6 4s',
+		species: 'Fe II',
+		tags: 'iron group, test'
+	});
+	// The review rule: an editor proposes the note, the owner confirms it (nobody confirms their own).
+	const editor = await newUser(browser, 'Eda Editor', 'shelf-editor');
+	await addMember(page, projectUrl, { email: editor.email, name: 'Eda Editor' }, 'editor');
 
 	// ⁶D₉/₂ is the Hund's-rule ground level of 3d⁶4s (Fe II ground level in the NIST/CRC ion tables).
+	await editor.page.goto(entryUrl);
+	const proposed = editor.page.locator('tr[data-level="6D#1|9/2"]');
+	await proposed.getByRole('button', { name: 'Annotate' }).click();
+	await editor.page.getByLabel('Observed energy (cm⁻¹)').fill('0');
+	await editor.page.getByLabel('± (cm⁻¹)').fill('0.01');
+	// A new note cannot be confirmed: the form does not offer it.
+	await expect(editor.page.locator('select[name=status] option')).toHaveText(['proposed', 'disputed']);
+	await editor.page.getByLabel('Comment').fill('adopted zero (test value)');
+	await editor.page.getByRole('button', { name: 'Save note' }).click();
+	await expect(proposed).toContainText('proposed');
+	await expect(proposed).toContainText('Eda Editor');
+
+	await page.goto(entryUrl);
 	const row = page.locator('tr[data-level="6D#1|9/2"]');
-	await row.getByRole('button', { name: 'Annotate' }).click();
-	await page.getByLabel('Observed energy (cm⁻¹)').fill('0');
-	await page.getByLabel('± (cm⁻¹)').fill('0.01');
+	await row.getByRole('button', { name: 'Edit' }).click();
 	await page.locator('select[name=status]').selectOption('confirmed');
-	await page.getByLabel('Comment').fill('adopted zero (test value)');
 	await page.getByRole('button', { name: 'Save note' }).click();
 	await expect(row).toContainText('confirmed');
 	await page.reload();
 	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('adopted zero (test value)');
 	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('Ola Owner');
+	await expect(page.locator('tr[data-level="6D#1|9/2"]')).toContainText('Eda Editor');
 	// A level with an observed energy appears on the cm⁻¹ diagram.
 	await expect(page.getByTestId('observed-diagram-svg')).toBeVisible();
 	await expect(page.getByTestId('observed-diagram-svg')).toHaveAttribute('aria-label', /⁶D₉\/₂ at 0 \(confirmed\)/);
@@ -40,7 +46,7 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	// Exports carry the note.
 	const csv = await (await page.request.get(`/api/v1/projects/${projectId}/shelf/${entryId}/levels?format=csv`)).text();
 	expect(csv.split('\r\n')[0]).toBe(
-		'level,term,occurrence,J,g,observed_energy_cm-1,uncertainty_cm-1,status,comment,updated_by,updated_at,parentage'
+		'configuration,level,term,occurrence,J,g,observed_energy_cm-1,uncertainty_cm-1,status,comment,updated_by,updated_at,parentage'
 	);
 	// Fe II a⁶D is 3d⁶(⁵D)4s (NIST ASD, from memory): the note's level carries its parent.
 	expect(csv).toMatch(/6D J=9\/2,6D,1,9\/2,14\/9,.*,3d⁶\(⁵D\)4s ⁶D/);
@@ -55,13 +61,19 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 
 	// A viewer sees the note but has no way to change it, and the API refuses.
 	const viewer = await newUser(browser, 'Vic Viewer', 'shelf-viewer');
-	await page.goto(`${projectUrl}/members`);
-	await page.getByLabel('E-mail of their account').fill(viewer.email);
-	await page.getByRole('button', { name: 'Add' }).click();
-	await expect(page.getByTestId('member-list')).toContainText('Vic Viewer');
+	await addMember(page, projectUrl, { email: viewer.email, name: 'Vic Viewer' }, 'viewer');
 	await viewer.page.goto(entryUrl);
 	await expect(viewer.page.locator('tr[data-level="6D#1|9/2"]')).toContainText('confirmed');
 	await expect(viewer.page.getByRole('button', { name: 'Annotate' })).toHaveCount(0);
+	await expect(viewer.page.getByRole('button', { name: 'Edit', exact: true })).toHaveCount(0);
+	// The viewer reads the note's history: proposed by the editor, confirmed by the owner.
+	await viewer.page.locator('tr[data-level="6D#1|9/2"]').getByRole('button', { name: 'History' }).click();
+	const history = viewer.page.getByTestId('note-history').locator('tbody tr');
+	await expect(history).toHaveCount(2);
+	await expect(history.nth(0)).toContainText('created');
+	await expect(history.nth(0)).toContainText('Eda Editor');
+	await expect(history.nth(1)).toContainText('confirmed');
+	await expect(history.nth(1)).toContainText('Ola Owner');
 	const put = await viewer.page.request.put(`/api/v1/projects/${projectId}/shelf/${entryId}/annotations`, {
 		data: { levelKey: '6D#1|7/2', observedEnergy: 1 }
 	});
@@ -82,14 +94,13 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	await shot(second, 'shelf-stale-note');
 
 	await owner.context.close();
+	await editor.context.close();
 	await viewer.context.close();
 });
 
 test('from "Fe II" in the Builder to a saved, annotated and exported level table', async ({ browser }) => {
 	const { context, page } = await newUser(browser, 'Fay Flow', 'flow');
-	await page.getByLabel('Name').fill('Iron lines');
-	await page.getByRole('button', { name: 'Create project' }).click();
-	await expect(page.getByRole('heading', { name: 'Iron lines' })).toBeVisible();
+	await createProject(page, 'Iron lines');
 
 	await page.goto('/builder');
 	await page.getByPlaceholder('Fe II, Nd3+').fill('Fe II');

@@ -62,7 +62,7 @@ const LISTED: Listed = {
 		access: 'viewer'
 	},
 	'GET /api/v1/projects/:projectId/review': {
-		summary: 'proposed level notes you could confirm (not your own), longest waiting first: ?limit=50',
+		summary: 'proposed and disputed level notes (yours: you proposed it, so another confirms it), longest waiting first: ?limit=50',
 		access: 'editor'
 	},
 	'GET /api/v1/projects/:projectId': { summary: 'one project', access: 'viewer' },

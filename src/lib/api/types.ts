@@ -239,7 +239,7 @@ export interface NoteHistoryJson {
 	createdAt: string;
 }
 
-/** A proposed note someone else may confirm (GET /api/v1/projects/:projectId/review). */
+/** A proposed or disputed note, awaiting review (GET /api/v1/projects/:projectId/review). */
 export interface ReviewItemJson {
 	id: string;
 	entryId: string;
@@ -252,7 +252,10 @@ export interface ReviewItemJson {
 	uncertainty: number | null;
 	uncertaintyText: string | null;
 	comment: string;
+	status: 'proposed' | 'disputed';
 	proposedBy: string | null;
+	/** The person asking proposed it, so cannot confirm it (review rule, src/lib/review.ts). */
+	yours: boolean;
 	updatedAt: string;
 	version: number;
 }

@@ -10,7 +10,7 @@ import { sqlite } from './db';
 import { signUp } from './services/users';
 import { addMember, createProject, listMembers, listProjects } from './services/projects';
 import { createEntry, deleteEntry, updateEntry } from './services/shelf';
-import { saveAnnotation } from './services/annotations';
+import { deleteAnnotation, saveAnnotation } from './services/annotations';
 import { BACKUP_VERSION, exportProject, importProject, parseBackup } from './services/backup';
 import { statusOf } from './status-of';
 
@@ -36,11 +36,24 @@ function snapshot(pid: string) {
 			'select a.*, e.title as entry from level_annotations a join shelf_entries e on e.id = a.entry_id where e.project_id = ? order by e.title, a.level_key',
 			pid
 		).map((n) => without(n, 'id', 'entry_id')),
+		// Every column of every history row; a note's id becomes the order in which its history starts.
+		noteHistory: historyRows(pid),
 		activity: rows('select * from activity_log where project_id = ? order by id', pid).map((l) => ({
 			...without(l, 'id', 'project_id'),
 			subject: subject(l.subject)
 		}))
 	};
+}
+
+function historyRows(pid: string) {
+	const noteNames = new Map<unknown, string>();
+	return rows(
+		'select h.*, e.title as entry from level_annotation_history h join shelf_entries e on e.id = h.entry_id where e.project_id = ? order by h.id',
+		pid
+	).map((h) => {
+		if (!noteNames.has(h.annotation_id)) noteNames.set(h.annotation_id, `note ${noteNames.size + 1}`);
+		return { ...without(h, 'id', 'annotation_id', 'project_id', 'entry_id'), note: noteNames.get(h.annotation_id) } as Row;
+	});
 }
 
 const projectCount = () => (sqlite.prepare('select count(*) as n from projects').get() as { n: number }).n;
@@ -67,9 +80,23 @@ beforeAll(async () => {
 		status: 'proposed',
 		comment: 'invented'
 	});
+	// The note's history: proposed by the editor, confirmed by the owner (the review rule).
+	saveAnnotation(owner, projectId, o3.id, {
+		levelKey: '3P#1|1',
+		observedEnergy: 113.2,
+		uncertainty: 0.1,
+		status: 'confirmed',
+		comment: 'invented',
+		version: 1
+	});
 	saveAnnotation(owner, projectId, o3.id, { levelKey: '1D#1|2', observedEnergy: 20273.27, status: 'disputed' });
+	// A deleted note: its history travels too.
+	saveAnnotation(editor, projectId, o3.id, { levelKey: '3P#1|2', observedEnergy: '306.17', comment: 'blend' });
+	deleteAnnotation(owner, projectId, o3.id, '3P#1|2');
 	const fe = createEntry(owner, projectId, { title: 'Fe II', species: 'Fe II', notation: '[Ar] 3d6 4s' });
 	saveAnnotation(owner, projectId, fe.id, { levelKey: '6D#1|9/2', observedEnergy: 0, comment: 'ground' });
+	// A detached note (the configuration changed after it was written).
+	updateEntry(editor, projectId, fe.id, { notation: '[Ar] 3d7', version: 1 });
 	const gone = createEntry(owner, projectId, { title: 'Scratch', notation: '3d2' });
 	deleteEntry(owner, projectId, gone.id);
 });
@@ -85,6 +112,16 @@ describe('export → import loses nothing', () => {
 		expect(after.members).toEqual(before.members);
 		expect(after.entries).toEqual(before.entries);
 		expect(after.notes).toEqual(before.notes);
+		expect(after.noteHistory).toEqual(before.noteHistory);
+		expect(before.noteHistory.map((h) => [h.note, h.change, h.actor_name])).toEqual([
+			['note 1', 'created', 'Karl Editor'],
+			['note 1', 'confirmed', 'Ruth Owner'],
+			['note 2', 'created', 'Ruth Owner'],
+			['note 3', 'created', 'Karl Editor'],
+			['note 3', 'deleted', 'Ruth Owner'],
+			['note 4', 'created', 'Ruth Owner'],
+			['note 4', 'detached', 'Karl Editor']
+		]);
 		// The restored log is the original plus one line saying it was restored.
 		expect(after.activity.slice(0, -1)).toEqual(before.activity);
 		expect(after.activity.at(-1)).toMatchObject({ kind: 'project.restored', actor_name: 'Ruth Owner' });
@@ -122,6 +159,128 @@ describe('export → import loses nothing', () => {
 	});
 });
 
+describe('a file of format version 1 (written before note history and proposers were kept)', () => {
+	/** Written by hand in the shape version 1 had: notes without `ref` or `proposedBy`, no noteHistory section. */
+	const versionOne = {
+		format: 'termwright-project',
+		version: 1,
+		exportedAt: '2026-11-20T09:00:00.000Z',
+		exportedBy: 'ruth@example.org',
+		project: {
+			name: 'Old file',
+			description: '',
+			createdBy: 'ruth@example.org',
+			createdAt: '2026-11-01T08:00:00.000Z',
+			updatedAt: '2026-11-01T08:00:00.000Z'
+		},
+		members: [{ email: 'karl@example.org', name: 'Karl Editor', role: 'editor', since: '2026-11-02T08:00:00.000Z' }],
+		entries: [
+			{
+				ref: 'e-old',
+				title: 'C I ground',
+				species: 'C I',
+				notation: '1s2 2s2 2p2',
+				notes: '',
+				tags: [],
+				version: 1,
+				createdBy: 'karl@example.org',
+				createdAt: '2026-11-03T08:00:00.000Z',
+				updatedBy: 'karl@example.org',
+				updatedAt: '2026-11-03T08:00:00.000Z',
+				levelNotes: [
+					{
+						levelKey: '3P#1|1',
+						observedEnergy: 16.4,
+						observedEnergyText: '16.40',
+						uncertainty: null,
+						uncertaintyText: null,
+						detached: false,
+						detachedFrom: null,
+						status: 'confirmed',
+						comment: 'invented',
+						version: 2,
+						updatedBy: 'karl@example.org',
+						updatedAt: '2026-11-04T10:30:00.000Z'
+					},
+					{
+						levelKey: '1D#1|2',
+						observedEnergy: 10192.6,
+						uncertainty: 0.2,
+						status: 'proposed',
+						comment: '',
+						version: 1,
+						updatedBy: 'someone.gone@example.net',
+						updatedAt: '2026-11-05T10:30:00.000Z'
+					}
+				]
+			}
+		],
+		activity: [],
+		sections: {}
+	};
+
+	it('is read: the last person to change a note becomes its proposer, and its history starts with a "recorded" row', () => {
+		const report = importProject(owner, JSON.stringify(versionOne));
+		expect(report).toMatchObject({ name: 'Old file', entries: 1, levelNotes: 2 });
+		const notes = rows(
+			'select a.* from level_annotations a join shelf_entries e on e.id = a.entry_id where e.project_id = ? order by a.level_key',
+			report.projectId
+		);
+		expect(notes.map((n) => [n.level_key, n.status, n.proposed_by, n.updated_by])).toEqual([
+			['1D#1|2', 'proposed', null, null],
+			['3P#1|1', 'confirmed', editor.id, editor.id]
+		]);
+		expect(historyRows(report.projectId).map((h) => without(h, 'note', 'created_at'))).toEqual([
+			{
+				entry: 'C I ground',
+				level_key: '3P#1|1',
+				observed_energy: 16.4,
+				observed_energy_text: '16.40',
+				uncertainty: null,
+				uncertainty_text: null,
+				status: 'confirmed',
+				comment: 'invented',
+				detached: 0,
+				detached_from: null,
+				version: 2,
+				proposed_by: editor.id,
+				change: 'recorded',
+				actor_id: editor.id,
+				actor_name: 'Karl Editor'
+			},
+			{
+				entry: 'C I ground',
+				level_key: '1D#1|2',
+				observed_energy: 10192.6,
+				observed_energy_text: null,
+				uncertainty: 0.2,
+				uncertainty_text: null,
+				status: 'proposed',
+				comment: '',
+				detached: 0,
+				detached_from: null,
+				version: 1,
+				proposed_by: null,
+				change: 'recorded',
+				actor_id: null,
+				actor_name: 'someone'
+			}
+		]);
+		expect(historyRows(report.projectId).map((h) => h.created_at)).toEqual([
+			Date.parse('2026-11-04T10:30:00.000Z'),
+			Date.parse('2026-11-05T10:30:00.000Z')
+		]);
+	});
+
+	it('is written again as the newest version, with the recorded history', () => {
+		const report = importProject(owner, JSON.stringify(versionOne));
+		const again = exportProject(owner, report.projectId);
+		expect(again.version).toBe(BACKUP_VERSION);
+		expect((again.sections.noteHistory as { change: string }[]).map((h) => h.change)).toEqual(['recorded', 'recorded']);
+		expect(again.entries[0].levelNotes.map((n) => n.proposedBy)).toEqual([null, 'karl@example.org']);
+	});
+});
+
 describe('a file that cannot be restored is refused, and nothing is written', () => {
 	const good = () => exportProject(owner, projectId);
 	const refused = (text: string, message: RegExp) => {
@@ -152,6 +311,12 @@ describe('a file that cannot be restored is refused, and nothing is written', ()
 		const file2 = good();
 		(file2.entries[1] as { createdAt: string }).createdAt = 'yesterday';
 		refused(JSON.stringify(file2), /damaged at entries\.1\.createdAt: must be a date/);
+	});
+
+	it('a damaged note history says so', () => {
+		const file = good();
+		(file.sections.noteHistory as { change: string }[])[0].change = 'approved';
+		refused(JSON.stringify(file), /The backup's level note histories are damaged: .*Nothing was imported/);
 	});
 
 	it('records of a feature this server does not have', () => {

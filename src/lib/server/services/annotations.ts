@@ -167,10 +167,21 @@ const NOTE_ACTIVITY: Record<NoteEdit, { kind: ActivityKind; verb: string }> = {
 
 type NoteRow = typeof levelAnnotations.$inferSelect;
 
-/** The history row and the activity line of one change to a note, with the transaction of the change. */
-function recordChange(tx: Tx, actor: Actor, projectId: string, entry: { id: string; title: string }, note: NoteRow, change: NoteEdit) {
+/**
+ * The history row and the activity line of one change to a note, with the transaction of the change.
+ * `verb` replaces the summary's usual verb for the change ("pasted" instead of "added").
+ */
+export function recordChange(
+	tx: Tx,
+	actor: Actor,
+	projectId: string,
+	entry: { id: string; title: string },
+	note: NoteRow,
+	change: NoteEdit,
+	verb = NOTE_ACTIVITY[change].verb
+) {
 	recordNoteChange(tx, projectId, note, change, actor);
-	const { kind, verb } = NOTE_ACTIVITY[change];
+	const { kind } = NOTE_ACTIVITY[change];
 	const values = { observedEnergy: note.observedEnergyText ?? note.observedEnergy, uncertainty: note.uncertaintyText ?? note.uncertainty };
 	const summary =
 		change === 'deleted'
@@ -183,7 +194,7 @@ function recordChange(tx: Tx, actor: Actor, projectId: string, entry: { id: stri
 }
 
 /** The digits a note holds (notes saved before the digits were kept: the shortest decimal of the number). */
-const digits = (value: number | null, text: string | null) => text ?? (value === null ? null : numberText(value));
+export const digits = (value: number | null, text: string | null) => text ?? (value === null ? null : numberText(value));
 
 /**
  * Creates or changes the note on one level. The review rule (src/lib/review.ts) decides the

@@ -44,7 +44,7 @@ import { newId } from '../ids';
 import { logActivity, type Tx } from './activity';
 import { libraryColumns } from './shelf-library';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
-import { noteHistorySection } from './note-history';
+import { noteHistorySection, recordUntrackedNotes } from './note-history';
 import { parameterBackupSection } from './parameter-backup';
 
 /** What the file says it is. */
@@ -408,6 +408,8 @@ export function importProject(actor: Actor, fileText: string): ImportReport {
 				throw badRequest(`The backup's ${s.label} are damaged: ${parsed.error.issues[0]?.message}. Nothing was imported.`);
 			s.restore(tx, parsed.data, ctx);
 		}
+		// A file of format 1 has no note history: each note's history starts with its state in the file.
+		recordUntrackedNotes(tx, projectId);
 		const lost = notRestored.length
 			? `; ${notRestored.length} member${notRestored.length === 1 ? '' : 's'} without an account here not restored`
 			: '';

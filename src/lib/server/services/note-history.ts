@@ -8,7 +8,7 @@
  * Rows are found through their entry (joined to its project), so they follow an entry that moves
  * to another project; `project_id` is kept for the cascade and should move with it.
  */
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, notExists } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
 import { levelAnnotationHistory, levelAnnotations, shelfEntries, users, ASSIGNMENT_STATUSES } from '../db/schema';
@@ -28,7 +28,8 @@ type NoteRow = typeof levelAnnotations.$inferSelect;
 export function recordNoteChange(tx: Tx, projectId: string, note: NoteRow, change: NoteChange, actor: Pick<Actor, 'id' | 'name'>) {
 	const { id, updatedBy: _by, updatedAt: _at, ...fields } = note;
 	tx.insert(levelAnnotationHistory)
-		.values({ ...fields, annotationId: id, projectId, change, actorId: actor.id, actorName: actor.name })
+		// The time in milliseconds, as the note's own updatedAt (the column's default keeps whole seconds only).
+		.values({ ...fields, annotationId: id, projectId, change, actorId: actor.id, actorName: actor.name, createdAt: new Date() })
 		.run();
 }
 
@@ -64,6 +65,44 @@ export function noteHistory(actor: Actor, projectId: string, entryId: string, an
 		.all();
 	if (rows.length === 0) throw notFound('No such note on this Shelf entry of this project (nor a deleted one)');
 	return rows;
+}
+
+/**
+ * Gives every note of a project that has no history yet a first row, 'recorded': its state now,
+ * by the last person who changed it, at that time — as the migration did for notes older than the
+ * history. Used by the import for files without history (format 1) and notes the file's history
+ * leaves out, so every note's History has something to show.
+ */
+export function recordUntrackedNotes(tx: Tx, projectId: string) {
+	const untracked = tx
+		.select({ note: levelAnnotations, actorName: users.name })
+		.from(levelAnnotations)
+		.innerJoin(shelfEntries, and(eq(shelfEntries.id, levelAnnotations.entryId), eq(shelfEntries.projectId, projectId)))
+		.leftJoin(users, eq(users.id, levelAnnotations.updatedBy))
+		.where(
+			notExists(
+				tx
+					.select({ id: levelAnnotationHistory.id })
+					.from(levelAnnotationHistory)
+					.where(eq(levelAnnotationHistory.annotationId, levelAnnotations.id))
+			)
+		)
+		.orderBy(asc(levelAnnotations.updatedAt))
+		.all();
+	for (const { note, actorName } of untracked) {
+		const { id, updatedBy, updatedAt, ...fields } = note;
+		tx.insert(levelAnnotationHistory)
+			.values({
+				...fields,
+				annotationId: id,
+				projectId,
+				change: 'recorded',
+				actorId: updatedBy,
+				actorName: actorName ?? 'someone',
+				createdAt: updatedAt
+			})
+			.run();
+	}
 }
 
 // ------------------------------------------------------------------------------------------ backup

@@ -2,20 +2,23 @@
  * Many observed energies at once: a pasted column (format in $lib/energyPaste) becomes one note per
  * level, all in one transaction or none. Editors only. A line that cannot be placed saves nothing;
  * a note changed since the preview was shown (its version differs) refuses the whole paste (409).
- * Pasted notes are 'proposed': a new value needs review, whatever the old note's status was.
+ * Pasted notes follow the review rule (src/lib/review.ts): a new note is proposed by the person who
+ * pastes; a new value (energy or uncertainty) over an old note is their proposal, so a confirmed
+ * note becomes proposed again; a line that repeats a note's values keeps its status and proposer.
+ * Each note writes its history row and its activity line in the transaction of the paste.
  */
 import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
 import { levelAnnotations } from '../db/schema';
 import { projectAccess, type Actor } from '../access';
-import { badRequest, conflict } from '../errors';
+import { badRequest, conflict, ServiceError } from '../errors';
 import { parseInput } from '../validation';
 import { newId } from '../ids';
-import { annotatedLevels } from './annotations';
-import { logActivity, noteSummary } from './activity';
+import { annotatedLevels, digits, recordChange } from './annotations';
 import { resolvePaste, type PastePreview } from '../../energyPaste';
 import { levelText } from '../../levels';
+import { reviewOutcome } from '../../review';
 
 const pasteSchema = z.object({
 	text: z.string({ error: 'Paste the lines of energies as text' }).max(100_000, 'The paste is too long: at most 100 000 characters'),
@@ -38,7 +41,8 @@ function readPaste(actor: Actor, projectId: string, entryId: string, text: strin
 }
 
 /**
- * Saves every line of a paste as a 'proposed' note on its level. Input: { text, seen } where `seen`
+ * Saves every line of a paste as a note on its level (proposed, unless it repeats the values of a
+ * note that is there: that one keeps its status). Input: { text, seen } where `seen`
  * maps each level key to the note version the preview showed (0 for none). Throws 400 (with
  * `details.lines`) when a line is refused or nothing is pasted, 409 when a note changed since.
  * @example pasteNotes(editor, projectId, entryId, { text: '0 3P0\n16.4 3P1 ±0.2', seen: { '3P#1|0': 0, '3P#1|1': 0 } })
@@ -91,33 +95,33 @@ export function pasteNotes(actor: Actor, projectId: string, entryId: string, inp
 				// The old uncertainty belonged to the old value: a line without ± clears it.
 				uncertainty: row.uncertainty?.value ?? null,
 				uncertaintyText: row.uncertainty?.text ?? null,
-				status: 'proposed' as const,
 				comment: row.comment ?? current?.comment ?? '',
 				updatedBy: actor.id,
 				updatedAt: new Date()
 			};
+			const valuesChanged =
+				!current ||
+				digits(current.observedEnergy, current.observedEnergyText) !== values.observedEnergyText ||
+				digits(current.uncertainty, current.uncertaintyText) !== values.uncertaintyText;
+			// A paste proposes its values; repeating a note's values is not a new proposal.
+			const review = reviewOutcome(current ?? null, valuesChanged || !current ? 'proposed' : current.status, valuesChanged, actor.id);
+			// Never refused (a paste does not ask to confirm), but the rule has the last word.
+			if (!review.ok) throw new ServiceError(review.status, review.message, { level: row.levelKey });
+			const reviewed = { status: review.status, proposedBy: review.proposedBy };
+			const id = current?.id ?? newId();
 			if (current) {
 				replaced++;
 				tx.update(levelAnnotations)
-					.set({ ...values, version: current.version + 1 })
+					.set({ ...values, ...reviewed, version: current.version + 1 })
 					.where(eq(levelAnnotations.id, current.id))
 					.run();
 			} else {
 				tx.insert(levelAnnotations)
-					.values({ id: newId(), entryId, levelKey: row.levelKey, ...values })
+					.values({ id, entryId, levelKey: row.levelKey, ...values, ...reviewed })
 					.run();
 			}
-			logActivity(tx, {
-				projectId,
-				actor,
-				kind: 'note.saved',
-				summary: noteSummary(current ? 'pasted over' : 'pasted', levelText(row.levelKey), entry.title, {
-					observedEnergy: row.energy,
-					uncertainty: row.uncertainty,
-					status: 'proposed'
-				}),
-				subject: `entry:${entryId}`
-			});
+			const saved = tx.select().from(levelAnnotations).where(eq(levelAnnotations.id, id)).get()!;
+			recordChange(tx, actor, projectId, entry, saved, review.change, current ? 'pasted over' : 'pasted');
 		}
 		return { saved: preview.rows.length, replaced };
 	});

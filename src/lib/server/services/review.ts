@@ -1,9 +1,10 @@
 /**
- * What awaits review in a project: attached level notes with status proposed that the person
- * asking could confirm under the review rule (src/lib/review.ts) — everyone's but their own.
- * Only editors and owners may confirm, so only they may ask (viewers get 403).
+ * What awaits review in a project: attached level notes that are proposed (someone other than the
+ * proposer confirms them, src/lib/review.ts) or disputed (someone settles them). Each says whether
+ * the person asking proposed it, so the page can say who may confirm it. Only editors and owners
+ * may confirm, so only they may ask (viewers get 403).
  */
-import { and, asc, count, eq, isNull, ne, or, sql } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, sql } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
 import { levelAnnotations, shelfEntries, users } from '../db/schema';
@@ -23,18 +24,17 @@ const reviewQuerySchema = z.object({
 });
 
 /**
- * Proposed notes of the project that `actor` did not propose, longest waiting first: at most
- * `limit` (1 … 200, default 50) of them, and how many there are in all. A note whose proposer's
- * account is gone may be confirmed by anyone, so it is listed too.
+ * Proposed and disputed notes of the project, longest waiting first: at most `limit` (1 … 200,
+ * default 50) of them, and how many there are in all. `yours`: `actor` proposed it, so cannot
+ * confirm it (a note whose proposer's account is gone is nobody's: anyone may confirm it).
  */
 export function awaitingReview(actor: Actor, projectId: string, query: Record<string, unknown> = {}) {
 	projectAccess(actor, projectId, 'editor');
 	const { limit } = parseInput(reviewQuerySchema, Object.fromEntries(Object.entries(query).filter(([, v]) => v !== '')));
 	const waiting = and(
 		eq(shelfEntries.projectId, projectId),
-		eq(levelAnnotations.status, 'proposed'),
-		eq(levelAnnotations.detached, false),
-		or(isNull(levelAnnotations.proposedBy), ne(levelAnnotations.proposedBy, actor.id))
+		inArray(levelAnnotations.status, ['proposed', 'disputed']),
+		eq(levelAnnotations.detached, false)
 	);
 	const items = db
 		.select({
@@ -49,7 +49,10 @@ export function awaitingReview(actor: Actor, projectId: string, query: Record<st
 			uncertainty: levelAnnotations.uncertainty,
 			uncertaintyText: levelAnnotations.uncertaintyText,
 			comment: levelAnnotations.comment,
+			// Only these two are selected (`waiting`).
+			status: sql<'proposed' | 'disputed'>`${levelAnnotations.status}`,
 			proposedBy: users.name,
+			yours: sql<boolean>`coalesce(${levelAnnotations.proposedBy} = ${actor.id}, 0)`.mapWith(Boolean),
 			updatedAt: levelAnnotations.updatedAt,
 			version: levelAnnotations.version
 		})

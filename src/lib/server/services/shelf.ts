@@ -253,7 +253,7 @@ export function updateEntry(actor: Actor, projectId: string, entryId: string, in
 			projectId,
 			actor,
 			kind: 'entry.updated',
-			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”`,
+			summary: `changed ${changedFields(current, data)} of “${data.title ?? current.title}”${detachedNotes ? ` (${detachedNotes} level note${detachedNotes === 1 ? '' : 's'} detached)` : ''}`,
 			subject: `entry:${entryId}`
 		});
 		const entry = readEntry(projectId, entryId);

@@ -57,7 +57,8 @@ export const actions: Actions = {
 			levelKey,
 			typed: { observedEnergy: input.observedEnergy, uncertainty: input.uncertainty, comment: input.comment }
 		});
-		return result.ok ? { annotated: levelKey } : result.failure;
+		// `reopened`: new values turned a confirmed note back to proposed; the page says so.
+		return result.ok ? { annotated: levelKey, reopened: result.value.reopened } : result.failure;
 	},
 	/** The preview of a pasted column of energies (for pages without JavaScript; with it, the page previews as you type). */
 	pastePreview: async (event) => {
