@@ -9,11 +9,10 @@
  */
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { and, asc, eq, sql } from 'drizzle-orm';
-import type { RequestEvent } from '@sveltejs/kit';
 import { isActionFailure } from '@sveltejs/kit';
 import type { Actor } from './access';
 import { db, sqlite } from './db';
-import { activityLog, levelAnnotationHistory, levelAnnotations, shelfEntries } from './db/schema';
+import { activityLog, levelAnnotationHistory, levelAnnotations } from './db/schema';
 import { ServiceError } from './errors';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
@@ -254,7 +253,8 @@ describe('move an entry to another project', () => {
 });
 
 describe('tags edited in place (the ?/tags action: the Shelf PATCH of the tags alone)', () => {
-	function tagsEvent(actor: Actor, entryId: string, fields: Record<string, string>): RequestEvent {
+	type TagsEvent = Parameters<typeof actions.tags>[0];
+	function tagsEvent(actor: Actor, entryId: string, fields: Record<string, string>): TagsEvent {
 		const url = new URL(`http://localhost/projects/${home}/shelf/${entryId}?/tags`);
 		return {
 			url,
@@ -265,7 +265,7 @@ describe('tags edited in place (the ?/tags action: the Shelf PATCH of the tags a
 				body: new URLSearchParams(fields).toString()
 			}),
 			locals: { user: actor, session: null }
-		} as unknown as RequestEvent;
+		} as unknown as TagsEvent;
 	}
 
 	it('saves the tags only, with an activity row', async () => {
