@@ -151,6 +151,16 @@ test.describe('Line matcher screen (stateless)', () => {
 		await expect(page.getByTestId('match-table').locator('tr[data-unexplained="true"]')).toHaveCount(1);
 		await expect(page.getByTestId('unobserved-table')).toContainText('2p2 3P2 – 2p3d 3D3');
 		await expect(page.getByTestId('stick-spectrum').locator('line')).not.toHaveCount(0);
+		// The Grotrian diagram: the demo levels' terms as columns (2p² ³P ¹D ¹S, 2p3s ³P° ¹P°, 2p3d ³D°),
+		// one line drawn per explained line (20) between its two level bars.
+		const grotrian = page.getByTestId('grotrian-svg');
+		await expect(grotrian).toHaveAttribute(
+			'aria-label',
+			'Grotrian diagram: 12 levels in 6 term columns, 20 lines drawn (best candidate of each explained line)'
+		);
+		const download = page.waitForEvent('download');
+		await page.getByRole('region', { name: 'Grotrian diagram' }).getByRole('button', { name: 'Export PNG' }).click();
+		expect((await download).suggestedFilename()).toMatch(/^grotrian.*\.png$/);
 		await page.screenshot({ path: 'tests/screenshots/line-matcher.png', fullPage: true });
 
 		await page.getByLabel(/^Lines/).fill('wavelength,unit\n5000,parsec');
