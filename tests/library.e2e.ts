@@ -68,6 +68,11 @@ test('filter the Shelf, keep the filters in the URL, edit tags in place, copy an
 	await expect(titles(page)).toHaveText(['Iron ion, odd']);
 	await expect(page.getByTestId('shelf-matching')).toContainText('1 of 5 entries');
 
+	// The /shelf address is a link to the same list with the same filters.
+	await page.goto(`/projects/${projectId}/shelf?species=Fe+II&parity=even`);
+	await expect(page).toHaveURL(new RegExp(`/projects/${projectId}\\?species=Fe\\+II&parity=even$`));
+	await expect(titles(page)).toHaveText(['Iron ion']);
+
 	await page.getByRole('button', { name: 'Clear filters' }).click();
 	await expect(page.getByTestId('shelf-matching')).toContainText('5 of 5 entries');
 	await expect(page).toHaveURL(new RegExp(`/projects/${projectId}$`));
@@ -141,6 +146,20 @@ test('filter the Shelf, keep the filters in the URL, edit tags in place, copy an
 	await expect(titles(page)).toHaveText(['Carbon-like ground']);
 	await page.goto(`/projects/${second}/activity`);
 	await expect(page.locator('main')).toContainText('here from the project “Library A”');
+
+	// Duplicate in the project (the copy opens), then move the duplicate to the second project.
+	await page.goto(`/projects/${projectId}/shelf/${entryId}`);
+	await page.getByRole('button', { name: 'Duplicate here' }).click();
+	await expect(page.getByTestId('entry-title')).toHaveText('Carbon-like ground (copy)');
+	await expect(page.locator('tr[data-level="3P#1|2"]')).toContainText('invented test value');
+	page.once('dialog', (d) => d.accept());
+	await page.getByRole('button', { name: 'Move there' }).click();
+	await expect(page).toHaveURL(new RegExp(`/projects/${second}/shelf/`));
+	await expect(page.getByTestId('entry-title')).toHaveText('Carbon-like ground (copy)');
+	await page.goto(`/projects/${second}?sort=title`);
+	await expect(titles(page)).toHaveText(['Carbon-like ground', 'Carbon-like ground (copy)']);
+	await page.goto(`/projects/${projectId}`);
+	await expect(page.getByTestId('shelf-matching')).toContainText('5 of 5 entries');
 
 	// A viewer sees the tags but no control to change them, nor to duplicate, copy or move.
 	const viewer = await newUser(browser, 'Vera Viewer', 'library-viewer');

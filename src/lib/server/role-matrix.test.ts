@@ -76,6 +76,7 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/members ?/role': 'owner',
 	'ACTION /projects/:projectId/members ?/remove': 'owner',
 	'ACTION /projects/:projectId/members ?/leave': 'viewer',
+	'PAGE /projects/:projectId/shelf': 'viewer',
 	'PAGE /projects/:projectId/shelf/new': 'editor',
 	'ACTION /projects/:projectId/shelf/new ?/default': 'editor',
 	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
