@@ -108,7 +108,20 @@ const LISTED: Listed = {
 		summary: 'every change of one note (also of a deleted one), oldest first: values after the change, status, who, when',
 		access: 'viewer'
 	},
-	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' }
+	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': { summary: 'annotated level table: ?format=csv|json|tex', access: 'viewer' },
+	// library (issue 13, item 5): the source project's role is checked first, then the target's (editor)
+	'POST /api/v1/projects/:projectId/shelf/:entryId/duplicate': {
+		summary: 'a copy of the entry in the same project, with its level notes (confirmed notes arrive as proposed)',
+		access: 'editor'
+	},
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': {
+		summary: 'copy the entry with its notes and their history to another project you edit: {"projectId"}',
+		access: 'viewer'
+	},
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': {
+		summary: 'move the entry, its notes and their history to another project you edit: {"projectId"}',
+		access: 'editor'
+	}
 };
 
 /** The routes in the order listed, as plain data. */

@@ -187,6 +187,12 @@ export interface ShelfEntryJson {
 	warnings: string[];
 }
 
+/** A duplicated, copied or moved entry (in the project it is now in) and how many level notes came with it. */
+export interface ShelfTransferJson {
+	entry: ShelfEntryJson;
+	notes: number;
+}
+
 /** One page of the Shelf list with the counts and menus of its filters. */
 export interface ShelfPageJson {
 	entries: Omit<ShelfEntryJson, 'warnings'>[];
@@ -369,6 +375,9 @@ export interface ApiResponses {
 	'DELETE /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId': null;
 	'GET /api/v1/projects/:projectId/shelf/:entryId/annotations/:annotationId/history': { history: NoteHistoryJson[] };
 	'GET /api/v1/projects/:projectId/shelf/:entryId/levels': null;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/duplicate': ShelfTransferJson;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': ShelfTransferJson;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': ShelfTransferJson;
 }
 
 export type RouteKey = keyof ApiResponses;

@@ -76,6 +76,7 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/members ?/role': 'owner',
 	'ACTION /projects/:projectId/members ?/remove': 'owner',
 	'ACTION /projects/:projectId/members ?/leave': 'viewer',
+	'PAGE /projects/:projectId/shelf': 'viewer',
 	'PAGE /projects/:projectId/shelf/new': 'editor',
 	'ACTION /projects/:projectId/shelf/new ?/default': 'editor',
 	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
@@ -85,7 +86,13 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/shelf/:entryId ?/paste': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': 'editor',
-	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
+	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor',
+	// library (issue 13, item 5)
+	'ACTION /projects/:projectId/shelf/:entryId ?/tags': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/duplicate': 'editor',
+	// Copying out only reads the source: its viewers may copy to a project they edit (shelf-transfer.ts).
+	'ACTION /projects/:projectId/shelf/:entryId ?/copy': 'viewer',
+	'ACTION /projects/:projectId/shelf/:entryId ?/move': 'editor'
 };
 
 // ------------------------------------------------------------------ actors
@@ -194,6 +201,17 @@ function freshProject() {
 	return { projectId, entryId, annotationId };
 }
 
+/** A second project where every member of the fresh projects is an editor: the target of copies and moves. */
+function targetProject(): string {
+	const id = newId();
+	db.transaction((tx) => {
+		tx.insert(projects).values({ id, name: 'Matrix target', createdBy: people.owner.id }).run();
+		for (const who of ['owner', 'coOwner', 'editor', 'viewer'] as const)
+			tx.insert(memberships).values({ projectId: id, userId: people[who].id, role: 'editor' }).run();
+	});
+	return id;
+}
+
 /** Undoes what an allowed call may have changed on the actors themselves (passwords, tokens, site roles). */
 async function restoreActors() {
 	for (const [id, h] of originalHashes) db.update(users).set({ passwordHash: h }).where(eq(users.id, id)).run();
@@ -292,6 +310,11 @@ const SAMPLES: Record<string, Sample> = {
 		form: () => ({ text: '16.4 3P1\n43.5 3P2', seen: JSON.stringify({ '3P#1|1': 0, '3P#1|2': 1 }) })
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/tags': { form: () => ({ tags: 'matrix, tagged', version: '1' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/copy': { form: () => ({ projectId: targetProject() }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/move': { form: () => ({ projectId: targetProject() }) },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': { json: () => ({ projectId: targetProject() }) },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': { json: () => ({ projectId: targetProject() }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': {
 		form: (c) => ({ annotationId: c.annotationId, levelKey: '3P#1|1', version: '1' })
 	}
