@@ -86,7 +86,14 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/shelf/:entryId ?/paste': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': 'editor',
-	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
+	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor',
+	'PAGE /projects/:projectId/lists': 'viewer',
+	'ACTION /projects/:projectId/lists ?/preview': 'editor',
+	'ACTION /projects/:projectId/lists ?/save': 'editor',
+	'ACTION /projects/:projectId/lists ?/fromShelf': 'editor',
+	'ACTION /projects/:projectId/lists ?/delete': 'editor',
+	'PAGE /projects/:projectId/matcher': 'viewer',
+	'ACTION /projects/:projectId/matcher ?/judge': 'editor'
 };
 
 // ------------------------------------------------------------------ actors
@@ -329,6 +336,21 @@ const SAMPLES: Record<string, Sample> = {
 		form: () => ({ text: '16.4 3P1\n43.5 3P2', seen: JSON.stringify({ '3P#1|1': 0, '3P#1|2': 1 }) })
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
+	// The upload form carries the previewed text back in its hidden "csv" field, so no multipart file is needed here.
+	'ACTION /projects/:projectId/lists ?/preview': { form: () => ({ kind: 'levels', name: 'm', csv: 'energy,J,parity\n0,0,even' }) },
+	'ACTION /projects/:projectId/lists ?/save': { form: () => ({ kind: 'lines', name: 'm', csv: 'wavelength,unit,medium\n5000,A,air' }) },
+	'ACTION /projects/:projectId/lists ?/fromShelf': { form: (c) => ({ name: 'from notes', entryIds: c.entryId }) },
+	'ACTION /projects/:projectId/lists ?/delete': { form: (c) => ({ kind: 'levels', listId: c.levelListId }) },
+	'ACTION /projects/:projectId/matcher ?/judge': {
+		form: (c) => ({
+			lineId: String(c.lineId),
+			lowerLevelId: String(c.lowerLevelId),
+			upperLevelId: String(c.upperLevelId),
+			type: 'E1',
+			status: 'accepted'
+		})
+	},
+	'PAGE /projects/:projectId/matcher': { queryOf: (c) => `?levelListId=${c.levelListId}&lineListId=${c.lineListId}&types=E1` },
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': {
 		form: (c) => ({ annotationId: c.annotationId, levelKey: '3P#1|1', version: '1' })
 	}
