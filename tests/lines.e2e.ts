@@ -2,6 +2,7 @@
  * Transition finder, air/vacuum and Line matcher routes, as scripts use them (no sign-in). Check values name their sources.
  */
 import { expect, test } from '@playwright/test';
+import { newUser } from './helpers';
 
 test.describe('GET /api/v1/transitions', () => {
 	test('3s → 3p: ²S–²P° with strengths 4 : 2, i.e. 2 : 1 (Condon & Shortley 1935 ch. IX)', async ({ request }) => {
@@ -132,6 +133,23 @@ test.describe('Transition finder screen', () => {
 		await expect(page).toHaveURL(/upper=2p\+3s7/);
 	});
 
+	test('a signed-in person is offered the configurations on their Shelves; a visitor is told to sign in', async ({ browser, page }) => {
+		await page.goto('/transitions');
+		await expect(page.getByTestId('shelf-hint')).toContainText('Sign in to pick configurations');
+		const { page: member } = await newUser(browser, 'Fina Finder', 'finder');
+		await member.getByLabel('Name').fill('Finder project');
+		await member.getByRole('button', { name: 'Create project' }).click();
+		await member.getByRole('link', { name: 'Add configuration' }).click();
+		await member.getByLabel('Title').fill('O III excited');
+		await member.getByLabel('Configuration').fill('2p 3p');
+		await member.getByRole('button', { name: 'Save to Shelf' }).click();
+		await expect(member.getByTestId('entry-title')).toHaveText('O III excited');
+		await member.goto('/transitions');
+		await expect(member.getByTestId('shelf-hint')).toContainText('the 1 configuration on your projects');
+		await expect(member.getByTestId('shelf-configs').locator('option')).toHaveAttribute('value', '2p 3p');
+		await expect(member.getByLabel('Upper configuration')).toHaveAttribute('list', 'shelf-configs');
+	});
+
 	test('is linked from the top bar', async ({ page }) => {
 		await page.goto('/basis');
 		await page.getByRole('link', { name: 'Transition finder' }).click();
@@ -151,6 +169,16 @@ test.describe('Line matcher screen (stateless)', () => {
 		await expect(page.getByTestId('match-table').locator('tr[data-unexplained="true"]')).toHaveCount(1);
 		await expect(page.getByTestId('unobserved-table')).toContainText('2p2 3P2 – 2p3d 3D3');
 		await expect(page.getByTestId('stick-spectrum').locator('line')).not.toHaveCount(0);
+		// The Grotrian diagram: the demo levels' terms as columns (2p² ³P ¹D ¹S, 2p3s ³P° ¹P°, 2p3d ³D°),
+		// one line drawn per explained line (20) between its two level bars.
+		const grotrian = page.getByTestId('grotrian-svg');
+		await expect(grotrian).toHaveAttribute(
+			'aria-label',
+			'Grotrian diagram: 12 levels in 6 term columns, 20 lines drawn (best candidate of each explained line)'
+		);
+		const download = page.waitForEvent('download');
+		await page.getByRole('region', { name: 'Grotrian diagram' }).getByRole('button', { name: 'Export PNG' }).click();
+		expect((await download).suggestedFilename()).toMatch(/^grotrian.*\.png$/);
 		await page.screenshot({ path: 'tests/screenshots/line-matcher.png', fullPage: true });
 
 		await page.getByLabel(/^Lines/).fill('wavelength,unit\n5000,parsec');

@@ -40,7 +40,7 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	// Exports carry the note.
 	const csv = await (await page.request.get(`/api/v1/projects/${projectId}/shelf/${entryId}/levels?format=csv`)).text();
 	expect(csv.split('\r\n')[0]).toBe(
-		'level,term,occurrence,J,g,observed_energy_cm-1,uncertainty_cm-1,status,comment,updated_by,updated_at,parentage'
+		'configuration,level,term,occurrence,J,g,observed_energy_cm-1,uncertainty_cm-1,status,comment,updated_by,updated_at,parentage'
 	);
 	// Fe II a⁶D is 3d⁶(⁵D)4s (NIST ASD, from memory): the note's level carries its parent.
 	expect(csv).toMatch(/6D J=9\/2,6D,1,9\/2,14\/9,.*,3d⁶\(⁵D\)4s ⁶D/);

@@ -25,6 +25,8 @@ export interface AnnotatedLevelRow {
 	J: string;
 	g: string | null;
 	odd: boolean;
+	/** The entry's configuration as typed, core shorthand kept ("[Xe] 4f3"), as the JSON and LaTeX give it. */
+	configuration: string;
 	/** "3d⁶(⁵D)4s ⁶D"; null when the engine leaves parentage out. */
 	parentage?: string | null;
 	annotation: ExportedNote | null;
@@ -40,6 +42,9 @@ export interface DetachedNoteRow extends ExportedNote {
 const iso = (d: Date | string) => (typeof d === 'string' ? d : d.toISOString());
 
 export const annotatedLevelColumns: Column<AnnotatedLevelRow>[] = [
+	// CSV rows stand alone in a spreadsheet, so each carries its configuration; JSON has it once at
+	// the top and LaTeX in the caption.
+	{ key: 'configuration', only: ['csv'], value: (r) => r.configuration },
 	{
 		key: 'level',
 		latex: 'Level',

@@ -76,6 +76,31 @@ describe('partial edits', () => {
 	});
 });
 
+describe('the three exports agree', () => {
+	// Nd IV 4f³: odd parity (l = 3, three electrons) with ground level ⁴I₉/₂ by Hund's rules — a
+	// general fact of the field (the Nd³⁺ ground level, e.g. Dieke 1968). The rest is product rule.
+	it('an odd-parity [Xe] 4f3 entry: the same ° mark and the configuration as typed in CSV, JSON and LaTeX', () => {
+		const e = entry('[Xe] 4f3', 'Nd IV', 'Nd IV ground term');
+		saveAnnotation(editor, projectId, e.id, { levelKey: '4I#1|9/2', observedEnergy: '0', comment: 'ground' });
+		const csv = exportAnnotatedLevels(viewer, projectId, e.id, 'csv').body.split('\r\n');
+		expect(csv[0].split(',').slice(0, 2)).toEqual(['configuration', 'level']);
+		const ground = csv.find((line) => line.includes(',ground,'))!;
+		expect(ground.startsWith('[Xe] 4f3,4I° J=9/2,4I°,')).toBe(true);
+		expect(csv.filter((l) => l.startsWith('[Xe] 4f3,')).length).toBe(csv.filter(Boolean).length - 1);
+
+		const json = JSON.parse(exportAnnotatedLevels(viewer, projectId, e.id, 'json').body);
+		expect(json).toMatchObject({ configuration: '[Xe] 4f3', parity: 'odd', species: 'Nd IV' });
+		const row = json.rows.find((r: { comment: string | null }) => r.comment === 'ground');
+		expect(row).toMatchObject({ level: '4I° J=9/2', term: '4I°', J: '9/2' });
+
+		const tex = exportAnnotatedLevels(viewer, projectId, e.id, 'tex').body;
+		expect(tex).toContain('$^{4}\\mathrm{I}^{\\circ}_{9/2}$');
+		expect(tex).toContain('[Xe]~4f$^{3}$');
+		expect(tex).not.toMatch(/1s\$\^\{2\}/);
+		expect(tex).toContain('longtable');
+	});
+});
+
 describe('a configuration change keeps every note, detached', () => {
 	it('4f3 → 4f2 detaches all ten notes; they stay in the API, the page data and the exports', () => {
 		const e = entry('[Xe] 4f3', 'Nd IV');

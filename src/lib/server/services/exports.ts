@@ -31,7 +31,7 @@ const CAUTION = 'LS labels and g-factors are computed in pure LS coupling; obser
 export function exportAnnotatedLevels(actor: Actor, projectId: string, entryId: string, format: ExportFormat) {
 	const { entry, sheet, levels, detached } = annotatedLevels(actor, projectId, entryId);
 	const odd = sheet.configuration.parity === 'odd';
-	const rows: AnnotatedLevelRow[] = levels.map((l) => ({ ...l, odd }));
+	const rows: AnnotatedLevelRow[] = levels.map((l) => ({ ...l, odd, configuration: entry.notation }));
 	const notes: DetachedNoteRow[] = detached.map((n) => ({ ...n, levelText: levelText(n.levelKey) }));
 	const caption = {
 		text: `Levels of ${entry.species ? entry.species + ' ' : ''}${entry.notation} (${entry.title}). ${CAUTION}`,
