@@ -77,6 +77,8 @@ test('upload (bad file refused, nothing saved) → preview → save → match �
 	await expect(page.locator('tr[data-line="1"] [data-verdict="accepted"]')).toHaveCount(1);
 	await expect(page.locator('tr[data-line="1"] [data-verdict="accepted"]')).toContainText('Lena Lists — clean line on the invented plate');
 	await expect(page.getByTestId('matcher-summary')).toContainText('1 identified');
+	// The accepted line is drawn between its two levels in the Grotrian picture.
+	await expect(page.getByRole('img', { name: /Grotrian diagram: 12 levels in 6 term columns, 1 lines drawn / })).toBeVisible();
 	await shot(page, 'lists-project-matcher');
 
 	// Exports: the identified line with its levels, and the predicted lines nobody observed.

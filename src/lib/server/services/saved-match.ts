@@ -80,9 +80,10 @@ export function matchSavedLists(actor: Actor, projectId: string, input: unknown)
 	const options = parseInput(savedMatchSchema, input);
 	const levels = getLevelList(actor, projectId, options.levelListId);
 	const lines = getLineList(actor, projectId, options.lineListId);
+	const engineLevels = levels.rows.map(matchLevelOf);
 	let result;
 	try {
-		result = matchLines(levels.rows.map(matchLevelOf), lines.rows.map(observedLineOf), {
+		result = matchLines(engineLevels, lines.rows.map(observedLineOf), {
 			types: options.types,
 			tolerance: options.tolerance
 		});
@@ -97,6 +98,8 @@ export function matchSavedLists(actor: Actor, projectId: string, input: unknown)
 		levelList: levels.list,
 		lineList: lines.list,
 		levels: levels.rows,
+		/** The levels as the engine read them (2J, parsed term), for the Grotrian picture. */
+		engineLevels,
 		lines: lines.rows,
 		result,
 		identifications: identificationsOfLineList(projectId, options.lineListId),
