@@ -92,6 +92,24 @@ describe('fuzz: CSV uploads of level and line lists', () => {
 			{ numRuns: RUNS }
 		);
 	});
+	it('a file of valid rows in any column order is saved whole, every row', () => {
+		const level = fc.record({
+			energy: fc.double({ min: 0, max: 2e5, noNaN: true }).map((x) => x.toFixed(3)),
+			J: fc.constantFrom('0', '1', '2', '1/2', '3/2', '2.5'),
+			parity: fc.constantFrom('even', 'odd', 'e', 'o')
+		});
+		fc.assert(
+			fc.property(fc.array(level, { minLength: 1, maxLength: 30 }), fc.boolean(), (rows, swap) => {
+				const head = swap ? ['parity', 'J', 'energy'] : ['energy', 'J', 'parity'];
+				const csv = [head.join(','), ...rows.map((r) => head.map((h) => r[h as keyof typeof r]).join(','))].join('\n');
+				const before = totals().levels;
+				const saved = uploadLevelList(editor, projectId, { name: 'valid', csv }, { save: true }).list!;
+				expect(saved.rowCount).toBe(rows.length);
+				expect(totals().levels - before).toBe(rows.length);
+			}),
+			{ numRuns: RUNS }
+		);
+	});
 	it('noise of any kind is refused or saved, never an exception', () => {
 		fc.assert(
 			fc.property(fc.string({ maxLength: 300 }), fc.boolean(), (csv, levels) => check(levels ? 'levels' : 'lines', csv)),
