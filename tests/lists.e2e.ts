@@ -93,6 +93,14 @@ test('upload (bad file refused, nothing saved) → preview → save → match �
 	expect(unobserved.status()).toBe(200);
 	expect(await unobserved.text()).toMatch(/^lower,upper,type,ritz_wavenumber_cm-1/);
 
+	// A tolerance too tight for that pair: the verdict is still shown under its line, marked as outside these settings.
+	await page.getByLabel('Tolerance').selectOption('cm-1');
+	await page.getByLabel('Fixed value').fill('0.001');
+	await page.getByRole('button', { name: 'Match', exact: true }).click();
+	await expect(page.locator('tr[data-line="1"][data-outside="true"]')).toContainText('clean line on the invented plate');
+	await page.goBack();
+	await expect(page.locator('tr[data-line="1"] [data-verdict="accepted"]')).toHaveCount(1);
+
 	// The viewer: the same verdict, no buttons, no upload form; the API refuses a verdict.
 	const v = viewer.page;
 	await v.goto(page.url());
