@@ -9,6 +9,8 @@ import { createEntry } from '../src/lib/server/services/shelf';
 import { saveAnnotation } from '../src/lib/server/services/annotations';
 import type { Actor } from '../src/lib/server/access';
 import { DEMO_PASSWORD, demoGroupNotes, demoGroupProject, demoGroupShelf, demoNotes, demoProject, demoShelf, demoUsers } from './demo-data';
+import { uploadLevelList, uploadLineList } from '../src/lib/server/services/lists';
+import { DEMO_LEVEL_UPLOAD, DEMO_LINE_UPLOAD } from '../src/lib/lines/demo';
 
 async function main() {
 	if (db.select().from(users).where(eq(users.email, demoUsers[0].email)).get()) {
@@ -30,7 +32,11 @@ async function main() {
 			if (status === 'confirmed')
 				saveAnnotation(actors[by === 0 ? 1 : 0], project.id, entries[entry].id, { ...note, status, version: saved.version });
 		}
-		console.log(`Seeded the demo project "${project.name}" with ${demoShelf.length} Shelf entries.`);
+		// The Line matcher's invented lists (src/lib/lines/demo.ts), uploaded by the editor as a user would.
+		const editor = actors[demoUsers.findIndex((u) => u.role === 'editor')] ?? ownerActor;
+		uploadLevelList(editor, project.id, { name: 'Invented ion — observed levels', csv: DEMO_LEVEL_UPLOAD }, { save: true });
+		uploadLineList(editor, project.id, { name: 'Invented ion — line list', csv: DEMO_LINE_UPLOAD }, { save: true });
+		console.log(`Seeded the demo project "${project.name}" with ${demoShelf.length} Shelf entries, a level list and a line list.`);
 	}
 	seedGroupProject();
 	console.log('Demo accounts (password for all: ' + DEMO_PASSWORD + '):');

@@ -33,6 +33,7 @@ export const ACTIVITY_KINDS = {
 	'parameters.saved': 'saved parameters',
 	'fit.saved': 'saved a fit',
 	'list.uploaded': 'uploaded a list',
+	'list.deleted': 'deleted a list',
 	'identification.accepted': 'accepted an identification',
 	'identification.rejected': 'rejected an identification'
 } as const;

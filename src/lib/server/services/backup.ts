@@ -45,6 +45,7 @@ import { logActivity, type Tx } from './activity';
 import { libraryColumns } from './shelf-library';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 import { noteHistorySection, recordUntrackedNotes } from './note-history';
+import { listsSection } from './lists-backup';
 
 /** What the file says it is. */
 export const BACKUP_FORMAT = 'termwright-project';
@@ -78,7 +79,10 @@ export interface BackupSection<T> {
 }
 
 /** Sections other features register (the Energy solver, Line matcher and uploads join here). */
-export const BACKUP_SECTIONS: BackupSection<unknown>[] = [noteHistorySection as BackupSection<unknown>];
+export const BACKUP_SECTIONS: BackupSection<unknown>[] = [
+	noteHistorySection as BackupSection<unknown>,
+	listsSection as BackupSection<unknown>
+];
 
 // ------------------------------------------------------------------------------------------ file shape
 
