@@ -119,3 +119,57 @@ export const demoNotes: {
 		comment: 'Assumed ground level; needs observed levels.'
 	}
 ];
+
+/**
+ * A second invented project, so an entry can be copied or moved between projects in the demo:
+ * a small student group's library of hot-star species. Tomasz owns it, Imre edits it, and Nalini
+ * (a viewer of the first project) edits here, so she can copy an entry out of the first one.
+ * Roles by index in demoUsers. Every name, number and note is made up.
+ */
+export const demoGroupProject = {
+	name: 'Kestrel student group — hot stars',
+	description: 'A small group’s library for the fictional hot star KRO-B 3 (demo data, invented).',
+	owner: 1,
+	members: [
+		{ user: 0, role: 'editor' as const },
+		{ user: 2, role: 'editor' as const }
+	]
+};
+
+export const demoGroupShelf = [
+	{
+		title: 'Neutral helium, first excited configuration',
+		species: 'He I',
+		notation: '1s 2p',
+		tags: ['hot star', 'singlet-triplet'],
+		notes: 'Singlet and triplet series; the energies entered are invented for the demo.'
+	},
+	{
+		title: 'Singly ionized carbon ground doublet',
+		species: 'C II',
+		notation: '[He] 2s2 2p',
+		tags: ['hot star'],
+		notes: 'A fine-structure pair only.'
+	},
+	{
+		title: 'Doubly ionized silicon, 3s3p',
+		species: 'Si III',
+		notation: '[Ne] 3s 3p',
+		tags: ['hot star', 'to check'],
+		notes: ''
+	}
+];
+
+/** Invented notes of the group project, by entry index (same rules as demoNotes). */
+export const demoGroupNotes: typeof demoNotes = [
+	{ entry: 1, by: 1, levelKey: '2P#1|1/2', observedEnergy: 0, uncertainty: 0, status: 'confirmed', comment: 'Ground level by definition.' },
+	{
+		entry: 1,
+		by: 1,
+		levelKey: '2P#1|3/2',
+		observedEnergy: 63.7,
+		uncertainty: 0.2,
+		status: 'proposed',
+		comment: 'From the far-infrared line of KRO-B 3 (invented).'
+	}
+];

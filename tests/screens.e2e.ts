@@ -100,14 +100,17 @@ test('members page shows the role the server holds after it refuses a change; Sh
 		data: { title: 'Fe II ground', species: 'Fe II', notation: '[Ar] 3d6 4s', tags: ['iron group', 'demo'] }
 	});
 	const entryId = (await created.json()).entry.id;
+	// A note is never created as confirmed (the review rule), so the widest marks here are disputed and proposed.
 	for (const [levelKey, observedEnergy, status] of [
-		['6D#1|9/2', '0', 'confirmed'],
-		['6D#1|7/2', '384.7872', 'disputed'],
+		['6D#1|9/2', '0', 'disputed'],
+		['6D#1|7/2', '384.7872', 'proposed'],
 		['6D#1|5/2', '667.6829', 'proposed']
-	])
-		await page.request.put(`/api/v1/projects/${projectId}/shelf/${entryId}/annotations`, {
+	]) {
+		const saved = await page.request.put(`/api/v1/projects/${projectId}/shelf/${entryId}/annotations`, {
 			data: { levelKey, observedEnergy, status, comment: 'invented value' }
 		});
+		expect(saved.ok(), await saved.text()).toBe(true);
+	}
 	await page.goto(`/projects/${projectId}/shelf/${entryId}`);
 	await shot(page, 'shelf-entry-1280');
 	await page.setViewportSize({ width: 768, height: 1000 });

@@ -18,6 +18,9 @@ export const ACTIVITY_KINDS = {
 	'entry.created': 'added a Shelf entry',
 	'entry.updated': 'changed a Shelf entry',
 	'entry.deleted': 'deleted a Shelf entry',
+	// library: a duplicate or a copy (in each project concerned), a move (in both projects)
+	'entry.copied': 'copied a Shelf entry',
+	'entry.moved': 'moved a Shelf entry',
 	'note.saved': 'changed a level note',
 	'note.confirmed': 'confirmed an assignment',
 	'note.disputed': 'disputed an assignment',
@@ -31,6 +34,7 @@ export const ACTIVITY_KINDS = {
 	'fit.saved': 'saved a fit',
 	'parameters.deleted': 'deleted parameters',
 	'list.uploaded': 'uploaded a list',
+	'list.deleted': 'deleted a list',
 	'identification.accepted': 'accepted an identification',
 	'identification.rejected': 'rejected an identification'
 } as const;

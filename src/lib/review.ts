@@ -22,6 +22,9 @@ export const NOTE_CHANGES = {
 	reattached: 'reattached',
 	detached: 'detached',
 	deleted: 'deleted',
+	// library: the note came with a copy of its entry (history copied before this row), or moved with it
+	copied: 'copied with its entry',
+	moved: 'moved with its entry to another project',
 	recorded: 'recorded before history was kept'
 } as const;
 

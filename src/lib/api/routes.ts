@@ -136,6 +136,59 @@ const LISTED: Listed = {
 	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': {
 		summary: 'a fit report as a file: ?format=csv|json|tex[&download]',
 		access: 'viewer'
+	},
+	// library (issue 13, item 5): the source project's role is checked first, then the target's (editor)
+	'POST /api/v1/projects/:projectId/shelf/:entryId/duplicate': {
+		summary: 'a copy of the entry in the same project, with its level notes (confirmed notes arrive as proposed)',
+		access: 'editor'
+	},
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': {
+		summary: 'copy the entry with its notes and their history to another project you edit: {"projectId"}',
+		access: 'viewer'
+	},
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': {
+		summary: 'move the entry, its notes and their history to another project you edit: {"projectId"}',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/level-lists': { summary: 'the saved level lists, newest first', access: 'viewer' },
+	'POST /api/v1/projects/:projectId/level-lists': {
+		summary:
+			'upload a level CSV { name, csv, preview? } (energy, uncertainty, J, parity, configuration, term, g; at most 5 MB and 200 000 rows; any problem saves nothing: 422 with problems) or make one from Shelf notes { name, entryIds }',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/level-lists/:levelListId': { summary: 'one level list with its levels', access: 'viewer' },
+	'DELETE /api/v1/projects/:projectId/level-lists/:levelListId': {
+		summary: 'delete a level list and its identifications',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/line-lists': { summary: 'the saved line lists, newest first', access: 'viewer' },
+	'POST /api/v1/projects/:projectId/line-lists': {
+		summary:
+			'upload a line CSV { name, csv, preview? } (wavelength, unit A|nm|cm-1, medium air|vacuum, uncertainty, intensity, comment; at most 5 MB and 200 000 rows; any problem saves nothing)',
+		access: 'editor'
+	},
+	'GET /api/v1/projects/:projectId/line-lists/:lineListId': { summary: 'one line list with its lines', access: 'viewer' },
+	'DELETE /api/v1/projects/:projectId/line-lists/:lineListId': { summary: 'delete a line list and its identifications', access: 'editor' },
+	'GET /api/v1/projects/:projectId/identifications': {
+		summary: 'accepted and rejected identifications: ?lineListId=&status=accepted|rejected',
+		access: 'viewer'
+	},
+	'PUT /api/v1/projects/:projectId/identifications': {
+		summary:
+			'accept or reject a candidate { lineId, upperLevelId, lowerLevelId, type, status, note? }; several accepted on a line = a blend',
+		access: 'editor'
+	},
+	'POST /api/v1/projects/:projectId/match': {
+		summary: 'Line matcher on saved lists { levelListId, lineListId, types?, toleranceUnit?, tolerance?, coverage? }',
+		access: 'viewer'
+	},
+	'GET /api/v1/projects/:projectId/exports/identified': {
+		summary: 'identified lines of a line list: ?lineListId=&format=csv|json|tex',
+		access: 'viewer'
+	},
+	'GET /api/v1/projects/:projectId/exports/unobserved': {
+		summary: 'strong predicted lines not observed: ?levelListId=&lineListId=&types=E1&toleranceUnit=&tolerance=&format=csv|json|tex',
+		access: 'viewer'
 	}
 };
 

@@ -187,6 +187,12 @@ export interface ShelfEntryJson {
 	warnings: string[];
 }
 
+/** A duplicated, copied or moved entry (in the project it is now in) and how many level notes came with it. */
+export interface ShelfTransferJson {
+	entry: ShelfEntryJson;
+	notes: number;
+}
+
 /** One page of the Shelf list with the counts and menus of its filters. */
 export interface ShelfPageJson {
 	entries: Omit<ShelfEntryJson, 'warnings'>[];
@@ -428,6 +434,24 @@ export interface ApiResponses {
 	'POST /api/v1/projects/:projectId/shelf/:entryId/fits': { fit: FitReportJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId': { fit: FitReportJson };
 	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': null;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/duplicate': ShelfTransferJson;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': ShelfTransferJson;
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': ShelfTransferJson;
+	// Saved level and line lists, identifications (services/lists.ts, identifications.ts, list-exports.ts)
+	'GET /api/v1/projects/:projectId/level-lists': { levelLists: LevelListJson[] };
+	/** A preview (`preview: true`) has `list: null`; a list made from Shelf notes has `preview: null`. */
+	'POST /api/v1/projects/:projectId/level-lists': { list: LevelListJson | null; preview: UploadPreviewJson<UploadedLevelJson> | null };
+	'GET /api/v1/projects/:projectId/level-lists/:levelListId': { list: LevelListJson; rows: LevelRowJson[] };
+	'DELETE /api/v1/projects/:projectId/level-lists/:levelListId': null;
+	'GET /api/v1/projects/:projectId/line-lists': { lineLists: LineListJson[] };
+	'POST /api/v1/projects/:projectId/line-lists': { list: LineListJson | null; preview: UploadPreviewJson<UploadedLineJson> };
+	'GET /api/v1/projects/:projectId/line-lists/:lineListId': { list: LineListJson; rows: LineRowJson[] };
+	'DELETE /api/v1/projects/:projectId/line-lists/:lineListId': null;
+	'GET /api/v1/projects/:projectId/identifications': { identifications: IdentificationJson[] };
+	'PUT /api/v1/projects/:projectId/identifications': { identification: IdentificationJson };
+	'POST /api/v1/projects/:projectId/match': SavedMatchResponse;
+	'GET /api/v1/projects/:projectId/exports/identified': null;
+	'GET /api/v1/projects/:projectId/exports/unobserved': null;
 }
 
 export type RouteKey = keyof ApiResponses;
@@ -453,3 +477,96 @@ export interface ActivityJson {
 	subject: string | null;
 	createdAt: string;
 }
+
+// ---------------------------------------------------------------- saved level and line lists
+
+export interface LevelListJson {
+	id: string;
+	name: string;
+	source: 'upload' | 'shelf';
+	/** The Shelf entries a 'shelf' list was made from. */
+	sourceEntries: string[];
+	rowCount: number;
+	version: number;
+	createdAt: string;
+	createdBy: string | null;
+}
+
+export interface LineListJson {
+	id: string;
+	name: string;
+	source: 'upload';
+	rowCount: number;
+	version: number;
+	createdAt: string;
+	createdBy: string | null;
+}
+
+/** A level as read from a file: energy in cm⁻¹ and its digits as typed, J as text ("3/2"). */
+export interface UploadedLevelJson {
+	energy: number;
+	energyText: string;
+	uncertainty: number | null;
+	J: string;
+	parity: 'even' | 'odd';
+	configuration: string;
+	term: string;
+	g: number | null;
+}
+
+export interface LevelRowJson extends UploadedLevelJson {
+	id: number;
+	/** 1 = the file's first data row. */
+	position: number;
+}
+
+/** A line as read from a file; the uncertainty is in the line's unit. */
+export interface UploadedLineJson {
+	wavelength: number;
+	wavelengthText: string;
+	unit: 'A' | 'nm' | 'cm-1';
+	medium: 'air' | 'vacuum';
+	uncertainty: number | null;
+	intensity: number | null;
+	comment: string;
+}
+
+export interface LineRowJson extends UploadedLineJson {
+	id: number;
+	position: number;
+}
+
+/** What an upload read: the first rows, the problems (row 1 = first data row, 0 = the header) and their count. */
+export interface UploadPreviewJson<T> {
+	rowCount: number;
+	first: T[];
+	problems: { row: number; column: string; message: string }[];
+	problemCount: number;
+}
+
+export interface IdentificationJson {
+	id: string;
+	lineId: number;
+	lineListId: string;
+	upperLevelId: number;
+	lowerLevelId: number;
+	levelListId: string;
+	type: TransitionType;
+	/** σ observed − σ Ritz, cm⁻¹, computed by the server. */
+	residual: number | null;
+	status: 'accepted' | 'rejected';
+	note: string;
+	version: number;
+	updatedAt: string;
+	updatedBy: string | null;
+}
+
+/** The matcher on saved lists: indices of `matches` and `unobserved` point into `levelIds` / `lineIds`. */
+export type SavedMatchResponse = MatchResult & {
+	levelIds: number[];
+	lineIds: number[];
+	identifications: IdentificationJson[];
+	tolerance: Tolerance;
+	types: TransitionType[];
+	caution: string;
+};

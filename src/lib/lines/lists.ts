@@ -42,18 +42,39 @@ export interface Parsed<T> {
 export const LEVEL_COLUMNS = ['energy', 'J', 'parity', 'term', 'label', 'uncertainty'] as const;
 export const LINE_COLUMNS = ['wavelength', 'unit', 'medium', 'uncertainty', 'intensity'] as const;
 
-function table(
+/** Limits of one `table` call: pasted lists by characters; uploaded files by rows as well (their bytes are checked by the caller). */
+export interface TableLimits {
+	maxChars?: number;
+	/** Data rows read at most; one more is read to tell that the file is longer. */
+	maxRows?: number;
+}
+
+/** The rows of a CSV text with a header row, and the problems of its header and shape (row 0 = the header). */
+export function table(
 	text: string,
 	required: readonly string[],
-	known: readonly string[]
+	known: readonly string[],
+	limits: TableLimits = {}
 ): { data: Record<string, string>[]; problems: ListProblem[] } {
-	if (text.length > MAX_LIST_CHARS)
-		return { data: [], problems: [{ row: 0, column: '', message: `the list is over ${MAX_LIST_CHARS} characters` }] };
+	const maxChars = limits.maxChars ?? MAX_LIST_CHARS;
+	if (text.length > maxChars) return { data: [], problems: [{ row: 0, column: '', message: `the list is over ${maxChars} characters` }] };
 	const parsed = Papa.parse<Record<string, string>>(text.trim(), {
 		header: true,
 		skipEmptyLines: 'greedy',
-		transformHeader: (h) => h.trim()
+		transformHeader: (h) => h.trim(),
+		...(limits.maxRows ? { preview: limits.maxRows + 1 } : {})
 	});
+	if (limits.maxRows && parsed.data.length > limits.maxRows)
+		return {
+			data: [],
+			problems: [
+				{
+					row: limits.maxRows + 1,
+					column: '',
+					message: `the file has more than ${limits.maxRows} rows; split it into files of at most ${limits.maxRows} rows`
+				}
+			]
+		};
 	const fields = parsed.meta.fields ?? [];
 	const problems: ListProblem[] = [];
 	for (const r of required)
@@ -61,8 +82,8 @@ function table(
 			problems.push({ row: 0, column: r, message: `the header row needs a column "${r}" (columns: ${known.join(', ')})` });
 	for (const f of fields)
 		if (!known.includes(f)) problems.push({ row: 0, column: f, message: `unknown column "${f}"; allowed: ${known.join(', ')}` });
-	// A one-column list has no delimiter to detect; that is not a problem.
-	for (const e of parsed.errors.filter((x) => x.code !== 'UndetectableDelimiter').slice(0, 5))
+	// A one-column list has no delimiter to detect, and a row may leave out its empty trailing cells: neither is a problem.
+	for (const e of parsed.errors.filter((x) => x.code !== 'UndetectableDelimiter' && x.code !== 'TooFewFields').slice(0, 5))
 		problems.push({ row: (e.row ?? -1) + 1, column: '', message: e.message });
 	return { data: parsed.data, problems };
 }
@@ -73,10 +94,12 @@ function number(v: string | undefined): number | null {
 	return Number.isFinite(x) ? x : Number.NaN;
 }
 
-function collect<T>(
+/** Reads every row with `read`; problems name the row (1 = first data row); any problem empties `rows`. */
+export function collect<T>(
 	data: Record<string, string>[],
 	head: ListProblem[],
-	read: (r: Record<string, string>, bad: (column: string, message: string) => void) => T | null
+	read: (r: Record<string, string>, bad: (column: string, message: string) => void) => T | null,
+	maxProblems = MAX_PROBLEMS
 ): Parsed<T> {
 	const rows: T[] = [];
 	const problems = [...head];
@@ -86,7 +109,7 @@ function collect<T>(
 		const value = read(raw, (column, message) => {
 			ok = false;
 			problemCount++;
-			if (problems.length < MAX_PROBLEMS) problems.push({ row: i + 1, column, message });
+			if (problems.length < maxProblems) problems.push({ row: i + 1, column, message });
 		});
 		if (ok && value) rows.push(value);
 	});

@@ -12,6 +12,8 @@ export interface FormFields {
 	checked(name: string): boolean;
 	/** An uploaded file, or null. */
 	file(name: string): File | null;
+	/** Every text value sent under `name` (checkbox groups), in form order. */
+	all(name: string): string[];
 }
 
 /** The submitted fields of a form action's request. */
@@ -34,7 +36,8 @@ export function fieldsOf(form: FormData): FormFields {
 		file: (name) => {
 			const v = form.get(name);
 			return v instanceof File ? v : null;
-		}
+		},
+		all: (name) => form.getAll(name).filter((v): v is string => typeof v === 'string')
 	};
 }
 

@@ -29,6 +29,7 @@ import {
 	shelfEntries,
 	users
 } from './db/schema';
+import { levelListRows, levelLists, lineListRows, lineLists } from './db/schema';
 import { newId } from './ids';
 import { newSecret } from './secret-tokens';
 import { catchMailInTests } from './catch-mail';
@@ -87,6 +88,7 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/members ?/role': 'owner',
 	'ACTION /projects/:projectId/members ?/remove': 'owner',
 	'ACTION /projects/:projectId/members ?/leave': 'viewer',
+	'PAGE /projects/:projectId/shelf': 'viewer',
 	'PAGE /projects/:projectId/shelf/new': 'editor',
 	'ACTION /projects/:projectId/shelf/new ?/default': 'editor',
 	'PAGE /projects/:projectId/shelf/:entryId': 'viewer',
@@ -96,7 +98,20 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	'ACTION /projects/:projectId/shelf/:entryId ?/paste': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': 'editor',
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': 'editor',
-	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor'
+	'ACTION /projects/:projectId/shelf/:entryId ?/delete': 'editor',
+	// library (issue 13, item 5)
+	'ACTION /projects/:projectId/shelf/:entryId ?/tags': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/duplicate': 'editor',
+	// Copying out only reads the source: its viewers may copy to a project they edit (shelf-transfer.ts).
+	'ACTION /projects/:projectId/shelf/:entryId ?/copy': 'viewer',
+	'ACTION /projects/:projectId/shelf/:entryId ?/move': 'editor',
+	'PAGE /projects/:projectId/lists': 'viewer',
+	'ACTION /projects/:projectId/lists ?/preview': 'editor',
+	'ACTION /projects/:projectId/lists ?/save': 'editor',
+	'ACTION /projects/:projectId/lists ?/fromShelf': 'editor',
+	'ACTION /projects/:projectId/lists ?/delete': 'editor',
+	'PAGE /projects/:projectId/matcher': 'viewer',
+	'ACTION /projects/:projectId/matcher ?/judge': 'editor'
 };
 
 // ------------------------------------------------------------------ actors
@@ -202,7 +217,42 @@ function freshProject() {
 			})
 			.run();
 	});
-	return { projectId, entryId, annotationId };
+	return { projectId, entryId, annotationId, ...savedLists(projectId) };
+}
+
+/** A level list (³P₀ even, ³D°₁ odd) and a line list of one line between them, for the saved-list routes. */
+function savedLists(projectId: string) {
+	const levelListId = newId();
+	const lineListId = newId();
+	return db.transaction((tx) => {
+		tx.insert(levelLists).values({ id: levelListId, projectId, name: 'matrix levels', source: 'upload', rowCount: 2 }).run();
+		const [lower, upper] = tx
+			.insert(levelListRows)
+			.values([
+				{ listId: levelListId, position: 1, energy: 0, energyText: '0', J: '0', parity: 'even', term: '3P' },
+				{ listId: levelListId, position: 2, energy: 20000, energyText: '20000', J: '1', parity: 'odd', term: '3D°' }
+			])
+			.returning({ id: levelListRows.id })
+			.all();
+		tx.insert(lineLists).values({ id: lineListId, projectId, name: 'matrix lines', rowCount: 1 }).run();
+		const line = tx
+			.insert(lineListRows)
+			.values({ listId: lineListId, position: 1, wavelength: 20000, wavelengthText: '20000', unit: 'cm-1', medium: 'vacuum' })
+			.returning({ id: lineListRows.id })
+			.get();
+		return { levelListId, lineListId, lineId: line.id, lowerLevelId: lower.id, upperLevelId: upper.id };
+	});
+}
+
+/** A second project where every member of the fresh projects is an editor: the target of copies and moves. */
+function targetProject(): string {
+	const id = newId();
+	db.transaction((tx) => {
+		tx.insert(projects).values({ id, name: 'Matrix target', createdBy: people.owner.id }).run();
+		for (const who of ['owner', 'coOwner', 'editor', 'viewer'] as const)
+			tx.insert(memberships).values({ projectId: id, userId: people[who].id, role: 'editor' }).run();
+	});
+	return id;
 }
 
 /** Undoes what an allowed call may have changed on the actors themselves (passwords, tokens, site roles). */
@@ -215,9 +265,11 @@ async function restoreActors() {
 
 // ------------------------------------------------------------------ sample inputs (so that allowed calls succeed)
 
-type Ctx = { projectId: string; entryId: string; annotationId: string; actor: Actor | null; n: number };
+type Ctx = { projectId: string; entryId: string; annotationId: string; actor: Actor | null; n: number } & ReturnType<typeof savedLists>;
 type Sample = {
 	query?: string;
+	/** A query that needs the call's project (ids of its lists). */
+	queryOf?: (ctx: Ctx) => string;
 	body?: Record<string, unknown>;
 	form?: (ctx: Ctx) => Record<string, string>;
 	json?: (ctx: Ctx) => unknown;
@@ -323,6 +375,16 @@ const SAMPLES: Record<string, Sample> = {
 	},
 	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId': { params: (c) => ({ fitId: fitReportIn(c) }) },
 	'GET /api/v1/projects/:projectId/shelf/:entryId/fits/:fitId/export': { params: (c) => ({ fitId: fitReportIn(c) }), query: '?format=tex' },
+	'POST /api/v1/projects/:projectId/level-lists': { json: () => ({ name: 'uploaded', csv: 'energy,J,parity\n0,0,even\n100,1,odd' }) },
+	'POST /api/v1/projects/:projectId/line-lists': { json: () => ({ name: 'uploaded', csv: 'wavelength,unit,medium\n5000,A,air' }) },
+	'PUT /api/v1/projects/:projectId/identifications': {
+		json: (c) => ({ lineId: c.lineId, lowerLevelId: c.lowerLevelId, upperLevelId: c.upperLevelId, type: 'E1', status: 'accepted' })
+	},
+	'POST /api/v1/projects/:projectId/match': { json: (c) => ({ levelListId: c.levelListId, lineListId: c.lineListId }) },
+	'GET /api/v1/projects/:projectId/exports/identified': { queryOf: (c) => `?format=csv&lineListId=${c.lineListId}` },
+	'GET /api/v1/projects/:projectId/exports/unobserved': {
+		queryOf: (c) => `?format=json&levelListId=${c.levelListId}&lineListId=${c.lineListId}`
+	},
 	'ACTION /signin ?/default': { form: () => ({ email: 'signin@matrix.example', password: PASSWORD }) },
 	'ACTION /signup ?/default': { form: (c) => ({ name: 'New Person', email: `new${c.n}@matrix.example`, password: PASSWORD }) },
 	'ACTION /forgot ?/default': { form: () => ({ email: 'viewer@matrix.example' }) },
@@ -366,6 +428,26 @@ const SAMPLES: Record<string, Sample> = {
 		form: () => ({ text: '16.4 3P1\n43.5 3P2', seen: JSON.stringify({ '3P#1|1': 0, '3P#1|2': 1 }) })
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/tags': { form: () => ({ tags: 'matrix, tagged', version: '1' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/copy': { form: () => ({ projectId: targetProject() }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/move': { form: () => ({ projectId: targetProject() }) },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': { json: () => ({ projectId: targetProject() }) },
+	'POST /api/v1/projects/:projectId/shelf/:entryId/move': { json: () => ({ projectId: targetProject() }) },
+	// The upload form carries the previewed text back in its hidden "csv" field, so no multipart file is needed here.
+	'ACTION /projects/:projectId/lists ?/preview': { form: () => ({ kind: 'levels', name: 'm', csv: 'energy,J,parity\n0,0,even' }) },
+	'ACTION /projects/:projectId/lists ?/save': { form: () => ({ kind: 'lines', name: 'm', csv: 'wavelength,unit,medium\n5000,A,air' }) },
+	'ACTION /projects/:projectId/lists ?/fromShelf': { form: (c) => ({ name: 'from notes', entryIds: c.entryId }) },
+	'ACTION /projects/:projectId/lists ?/delete': { form: (c) => ({ kind: 'levels', listId: c.levelListId }) },
+	'ACTION /projects/:projectId/matcher ?/judge': {
+		form: (c) => ({
+			lineId: String(c.lineId),
+			lowerLevelId: String(c.lowerLevelId),
+			upperLevelId: String(c.upperLevelId),
+			type: 'E1',
+			status: 'accepted'
+		})
+	},
+	'PAGE /projects/:projectId/matcher': { queryOf: (c) => `?levelListId=${c.levelListId}&lineListId=${c.lineListId}&types=E1` },
 	'ACTION /projects/:projectId/shelf/:entryId ?/reattach': {
 		form: (c) => ({ annotationId: c.annotationId, levelKey: '3P#1|1', version: '1' })
 	}
@@ -490,11 +572,13 @@ function eventFor(cell: Cell, actorName: ActorName, ctx: Ctx): RequestEvent {
 		projectId: ctx.projectId,
 		entryId: ctx.entryId,
 		annotationId: ctx.annotationId,
+		levelListId: ctx.levelListId,
+		lineListId: ctx.lineListId,
 		token: 'not-a-live-reset-token',
 		...sample.params?.(ctx)
 	};
 	const pathname = cell.path.replace(/:(\w+)/g, (_, p: string) => encodeURIComponent(params[p]));
-	const url = new URL(`http://localhost${pathname}${sample.query ?? ''}`);
+	const url = new URL(`http://localhost${pathname}${sample.queryOf?.(ctx) ?? sample.query ?? ''}`);
 	const { user, token } = actorOf(actorName);
 	const headers = new Headers({ origin: 'http://localhost' });
 	if (token) headers.set('authorization', `Bearer ${token}`);

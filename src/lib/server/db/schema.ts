@@ -357,3 +357,136 @@ export const fitReports = sqliteTable(
 	},
 	(t) => [index('fit_reports_entry_idx').on(t.entryId, t.createdAt)]
 );
+
+/** Where a level list came from: an uploaded CSV file, or the annotated notes of Shelf entries. */
+export const LEVEL_LIST_SOURCES = ['upload', 'shelf'] as const;
+export type LevelListSource = (typeof LEVEL_LIST_SOURCES)[number];
+export const LINE_UNITS = ['A', 'nm', 'cm-1'] as const;
+export type LineUnit = (typeof LINE_UNITS)[number];
+export const LINE_MEDIA = ['air', 'vacuum'] as const;
+export type LineMedium = (typeof LINE_MEDIA)[number];
+export const IDENTIFICATION_STATUSES = ['accepted', 'rejected'] as const;
+export type IdentificationStatus = (typeof IDENTIFICATION_STATUSES)[number];
+export const IDENTIFICATION_TYPES = ['E1', 'M1', 'E2'] as const;
+
+/**
+ * A project's list of observed levels for the Line matcher. Rows are written once, with the list,
+ * and never edited (a corrected list is a new upload), so `version` only guards the name.
+ * `sourceEntries` holds the Shelf entry ids a 'shelf' list was made from.
+ */
+export const levelLists = sqliteTable(
+	'level_lists',
+	{
+		id: text('id').primaryKey(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		source: text('source', { enum: LEVEL_LIST_SOURCES }).notNull(),
+		sourceEntries: text('source_entries', { mode: 'json' }).$type<string[]>().notNull().default([]),
+		rowCount: integer('row_count').notNull().default(0),
+		version: integer('version').notNull().default(1),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('level_lists_project_idx').on(t.projectId, t.createdAt)]
+);
+
+/** One level of a level list: energy in cm⁻¹ (and its digits as typed), J as text ("3/2"), parity. */
+export const levelListRows = sqliteTable(
+	'level_list_rows',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		listId: text('list_id')
+			.notNull()
+			.references(() => levelLists.id, { onDelete: 'cascade' }),
+		/** 1 = the file's first data row; the order of the list. */
+		position: integer('position').notNull(),
+		energy: real('energy').notNull(),
+		energyText: text('energy_text').notNull(),
+		uncertainty: real('uncertainty'),
+		J: text('j').notNull(),
+		parity: text('parity', { enum: ['even', 'odd'] }).notNull(),
+		configuration: text('configuration').notNull().default(''),
+		term: text('term').notNull().default(''),
+		g: real('g')
+	},
+	(t) => [index('level_list_rows_list_idx').on(t.listId, t.position)]
+);
+
+/** A project's list of observed lines (uploaded CSV). */
+export const lineLists = sqliteTable(
+	'line_lists',
+	{
+		id: text('id').primaryKey(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		source: text('source', { enum: ['upload'] })
+			.notNull()
+			.default('upload'),
+		rowCount: integer('row_count').notNull().default(0),
+		version: integer('version').notNull().default(1),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [index('line_lists_project_idx').on(t.projectId, t.createdAt)]
+);
+
+/** One observed line: wavelength (digits as typed) in its unit and medium; uncertainty in the same unit. */
+export const lineListRows = sqliteTable(
+	'line_list_rows',
+	{
+		id: integer('id').primaryKey({ autoIncrement: true }),
+		listId: text('list_id')
+			.notNull()
+			.references(() => lineLists.id, { onDelete: 'cascade' }),
+		position: integer('position').notNull(),
+		wavelength: real('wavelength').notNull(),
+		wavelengthText: text('wavelength_text').notNull(),
+		unit: text('unit', { enum: LINE_UNITS }).notNull(),
+		medium: text('medium', { enum: LINE_MEDIA }).notNull(),
+		uncertainty: real('uncertainty'),
+		intensity: real('intensity'),
+		comment: text('comment').notNull().default('')
+	},
+	(t) => [index('line_list_rows_list_idx').on(t.listId, t.position)]
+);
+
+/**
+ * An editor's verdict on one candidate of the Line matcher: this line is (accepted) or is not
+ * (rejected) the transition between these two levels. Several accepted rows on one line = a blend.
+ * One row per (line, upper, lower); a new verdict on the same pair changes it. Rows go with the
+ * line or either level (their lists).
+ */
+export const identifications = sqliteTable(
+	'identifications',
+	{
+		id: text('id').primaryKey(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		lineId: integer('line_id')
+			.notNull()
+			.references(() => lineListRows.id, { onDelete: 'cascade' }),
+		upperLevelId: integer('upper_level_id')
+			.notNull()
+			.references(() => levelListRows.id, { onDelete: 'cascade' }),
+		lowerLevelId: integer('lower_level_id')
+			.notNull()
+			.references(() => levelListRows.id, { onDelete: 'cascade' }),
+		type: text('type', { enum: IDENTIFICATION_TYPES }).notNull(),
+		/** Observed minus Ritz wavenumber, cm⁻¹, when the verdict was given. */
+		residual: real('residual'),
+		status: text('status', { enum: IDENTIFICATION_STATUSES }).notNull(),
+		note: text('note').notNull().default(''),
+		version: integer('version').notNull().default(1),
+		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	},
+	(t) => [
+		uniqueIndex('identification_pair_idx').on(t.lineId, t.upperLevelId, t.lowerLevelId),
+		index('identification_project_idx').on(t.projectId, t.lineId)
+	]
+);

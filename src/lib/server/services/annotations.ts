@@ -151,8 +151,11 @@ export function annotatedLevels(actor: Actor, projectId: string, entryId: string
 	return { entry, sheet, levels, detached, warnings: entryWarnings(entry) };
 }
 
-/** Changes made through this module (detaching is done by a change of the entry's configuration, in shelf.ts). */
-type NoteEdit = Exclude<NoteChange, 'detached' | 'recorded'>;
+/**
+ * Changes made through this module (detaching is done by a change of the entry's configuration, in shelf.ts;
+ * copying and moving by shelf-transfer.ts, which logs the entry, not each note).
+ */
+type NoteEdit = Exclude<NoteChange, 'detached' | 'recorded' | 'copied' | 'moved'>;
 
 /** The activity kind and the verb of its summary for a kind of note change. */
 const NOTE_ACTIVITY: Record<NoteEdit, { kind: ActivityKind; verb: string }> = {

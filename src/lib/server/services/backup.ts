@@ -46,6 +46,7 @@ import { libraryColumns } from './shelf-library';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 import { noteHistorySection, recordUntrackedNotes } from './note-history';
 import { parameterBackupSection } from './parameter-backup';
+import { listsSection } from './lists-backup';
 
 /** What the file says it is. */
 export const BACKUP_FORMAT = 'termwright-project';
@@ -81,7 +82,8 @@ export interface BackupSection<T> {
 /** Sections other features register (the Energy solver, Line matcher and uploads join here). */
 export const BACKUP_SECTIONS: BackupSection<unknown>[] = [
 	noteHistorySection as BackupSection<unknown>,
-	parameterBackupSection as BackupSection<unknown>
+	parameterBackupSection as BackupSection<unknown>,
+	listsSection as BackupSection<unknown>
 ];
 
 // ------------------------------------------------------------------------------------------ file shape

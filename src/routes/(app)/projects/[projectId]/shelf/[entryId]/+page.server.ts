@@ -1,21 +1,25 @@
 import { fail, redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { deleteEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
+import { deleteEntry, getEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
 import { pasteNotes, previewPaste } from '$lib/server/services/paste-notes';
 import { listParameterSets } from '$lib/server/services/parameter-sets';
 import { listFitReports } from '$lib/server/services/fit-reports';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { readForm, shelfFieldsFrom } from '$lib/server/forms';
+import { splitTags } from '$lib/server/validation';
+import { copyEntry, duplicateEntry, editableProjects, moveEntry } from '$lib/server/services/shelf-transfer';
 
 export const load: PageServerLoad = (event) => {
 	const user = requireUser(event);
 	const { projectId, entryId } = event.params;
-	// annotatedLevels checks the role and returns the entry with its levels; the Energy solver's records follow.
+	// One role check and one read of the entry: annotatedLevels returns the entry with its levels;
+	// the Energy solver's records and the projects this entry can be copied or moved to follow.
 	return forPage(() => ({
 		...annotatedLevels(user, projectId, entryId),
 		parameterSets: listParameterSets(user, projectId, entryId),
-		fits: listFitReports(user, projectId, entryId)
+		fits: listFitReports(user, projectId, entryId),
+		targets: editableProjects(user, projectId)
 	}));
 };
 
@@ -38,6 +42,25 @@ export const actions: Actions = {
 			});
 		const result = await forAction(() => updateEntry(user, projectId, entryId, { ...values, version }), { values });
 		return result.ok ? { saved: true, detachedNotes: result.value.detachedNotes } : result.failure;
+	},
+	/**
+	 * Only the tags, with the version the editor read (the list and the entry page edit them in place).
+	 * A stale version answers 409 with the tags as they are now, and what was typed comes back untouched.
+	 */
+	tags: async (event) => {
+		const user = requireUser(event);
+		const form = await readForm(event.request);
+		const typed = form.text('tags');
+		const version = Number(form.text('version'));
+		const { projectId, entryId } = event.params;
+		const result = await forAction(() => updateEntry(user, projectId, entryId, { tags: splitTags(typed), version }), {
+			form: 'tags',
+			typed
+		});
+		if (result.ok) return { form: 'tags', tags: result.value.tags, version: result.value.version };
+		if (result.failure.status !== 409) return result.failure;
+		const now = getEntry(user, projectId, entryId);
+		return fail(409, { ...result.failure.data, currentTags: now.tags, currentVersion: now.version });
 	},
 	annotate: async (event) => {
 		const user = requireUser(event);
@@ -104,6 +127,33 @@ export const actions: Actions = {
 			noteId: annotationId
 		});
 		return result.ok ? { reattached: input.levelKey } : result.failure;
+	},
+	/** A copy here, titled "… (copy)", with its notes; opens the copy. */
+	duplicate: async (event) => {
+		const user = requireUser(event);
+		const result = await forAction(() => duplicateEntry(user, event.params.projectId, event.params.entryId), { form: 'transfer' });
+		if (!result.ok) return result.failure;
+		redirect(303, `/projects/${event.params.projectId}/shelf/${result.value.entry.id}`);
+	},
+	/** A copy in the chosen project; stays here and links to the copy. */
+	copy: async (event) => {
+		const user = requireUser(event);
+		const targetId = (await readForm(event.request)).text('projectId');
+		const result = await forAction(() => copyEntry(user, event.params.projectId, event.params.entryId, { projectId: targetId }), {
+			form: 'transfer'
+		});
+		if (!result.ok) return result.failure;
+		return { form: 'transfer', copied: { projectId: targetId, entryId: result.value.entry.id, notes: result.value.notes } };
+	},
+	/** The entry goes to the chosen project (its link changes): opens it there. */
+	move: async (event) => {
+		const user = requireUser(event);
+		const targetId = (await readForm(event.request)).text('projectId');
+		const result = await forAction(() => moveEntry(user, event.params.projectId, event.params.entryId, { projectId: targetId }), {
+			form: 'transfer'
+		});
+		if (!result.ok) return result.failure;
+		redirect(303, `/projects/${targetId}/shelf/${event.params.entryId}`);
 	},
 	delete: async (event) => {
 		const user = requireUser(event);
