@@ -13,7 +13,7 @@ test('2p2 on the Coupling bridge: computed curves, 5 levels, J = 2 shows 2, with
 		await page.getByRole('tab', { name: 'Coupling bridge' }).click();
 		const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
 		await expect(panel.getByTestId('bridge-ls-level')).toHaveCount(5);
-		await panel.getByLabel("Computed curves (from the Energy solver's parameters)").check();
+		await panel.getByRole('radio', { name: "Computed curves (from the Energy solver's parameters)" }).check();
 		const curves = panel.getByTestId('bridge-sweep-curve');
 		await expect(curves).toHaveCount(5);
 		await expect(panel.getByTestId('bridge-ls-level')).toHaveCount(0);
@@ -49,14 +49,36 @@ test('the computed bridge opens its parameters in the Energy solver, and goes ba
 	await page.goto('/builder?config=3d2');
 	await page.getByRole('tab', { name: 'Coupling bridge' }).click();
 	const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
-	await panel.getByLabel("Computed curves (from the Energy solver's parameters)").check();
+	await panel.getByRole('radio', { name: "Computed curves (from the Energy solver's parameters)" }).check();
 	await expect(panel.getByTestId('bridge-sweep-curve')).toHaveCount(9);
 	await expect(panel.getByTestId('bridge-sweep-parameters')).toContainText('V³⁺ free ion 3d²');
-	await panel.getByLabel('Schematic').check();
+	await panel.getByRole('radio', { name: 'Schematic' }).check();
 	await expect(panel.getByTestId('bridge-ls-level')).toHaveCount(9);
 	await expect(panel.getByTestId('bridge-note')).toContainText('Schematic');
-	await panel.getByLabel("Computed curves (from the Energy solver's parameters)").check();
+	await panel.getByRole('radio', { name: "Computed curves (from the Energy solver's parameters)" }).check();
 	await panel.getByTestId('bridge-open-solver').click();
 	const solver = page.getByRole('tabpanel', { name: 'Energy solver' });
 	await expect(solver.getByTestId('energy-preset')).toHaveValue('v3-3d2');
+});
+
+test('a configuration too large for the Energy solver: the computed curves say so and offer the schematic', async ({ page }) => {
+	// 4f2 5d 6p: 626 levels; its M_J = 0 block has 626 determinants, over the solver's block limit (the API's own message).
+	await page.setViewportSize({ width: 1280, height: 900 });
+	await page.goto('/builder?config=' + encodeURIComponent('4f2 5d 6p'));
+	await page.getByRole('tab', { name: 'Coupling bridge' }).click();
+	const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
+	// The bridge's own limit and message stay: too many levels to draw until a J is chosen.
+	await expect(panel.getByTestId('bridge-too-many')).toBeVisible();
+	await panel
+		.getByTestId('bridge-filter')
+		.getByRole('button', { name: /^J = 0 / })
+		.click();
+	await panel.getByRole('radio', { name: "Computed curves (from the Energy solver's parameters)" }).check();
+	const refusal = panel.getByTestId('bridge-sweep-error');
+	await expect(refusal).toContainText('not available for this configuration');
+	await expect(refusal).toContainText(/at most 400/);
+	await expect(panel.getByTestId('bridge-sweep-curve')).toHaveCount(0);
+	await refusal.getByRole('button', { name: 'Show the schematic bridge' }).click();
+	await expect(panel.getByRole('radio', { name: 'Schematic' })).toBeChecked();
+	await expect(panel.getByTestId('bridge-ls-level').first()).toBeVisible();
 });

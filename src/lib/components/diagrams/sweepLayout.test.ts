@@ -49,7 +49,8 @@ describe('sweep curve layout of 2p2', () => {
 		const P = layout.energyAt(byHeight[0].y);
 		expect(layout.energyAt(byHeight[3].y) - P).toBeCloseTo(6 * F2, 6);
 		expect(layout.energyAt(byHeight[4].y) - P).toBeCloseTo(15 * F2, 6);
-		// The degenerate ³P labels are nudged apart, never overlapping.
+		// The degenerate ³P labels are nudged apart, never overlapping, J increasing upwards (layout choice, no source).
+		expect([...layout.left].sort((a, b) => b.labelY - a.labelY).map((l) => l.text)).toEqual(['³P₀', '³P₁', '³P₂', '¹D₂', '¹S₀']);
 		const ys = layout.left.map((l) => l.labelY).sort((a, b) => a - b);
 		for (let i = 1; i < ys.length; i++) expect(ys[i] - ys[i - 1]).toBeGreaterThanOrEqual(box.labelGap - 1e-9);
 	});

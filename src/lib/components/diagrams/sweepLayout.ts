@@ -77,9 +77,11 @@ export function sweepJjText(label: string): string {
 	return label.replace(/_\{([^}]*)\}/g, (_, j: string) => sub(j)).replace(/\^(\d+)/g, (_, k: string) => sup(k));
 }
 
-/** Labels pushed apart by at least `gap`, keeping their order, not above `top`. */
+/** Labels pushed apart by at least `gap`, keeping their order (equal heights: the first lowest), not above `top`. */
 export function spreadLabels(ys: readonly number[], gap: number, top: number): number[] {
-	const order = ys.map((_, i) => i).sort((a, b) => ys[b] - ys[a] || a - b);
+	// Heights within 0.01 px count as equal (degenerate levels), and keep their input order from the bottom up.
+	const near = (v: number) => Math.round(v * 100);
+	const order = ys.map((_, i) => i).sort((a, b) => near(ys[b]) - near(ys[a]) || a - b);
 	const placed = new Array<number>(ys.length);
 	let last = Infinity;
 	for (const i of order) {
