@@ -28,6 +28,8 @@ test('2p2 on the Coupling bridge: computed curves, 5 levels, J = 2 shows 2, with
 		// LS labels at the left end, jj groups at the right: (1/2)², (1/2 3/2), (3/2)².
 		await expect(panel.getByTestId('bridge-sweep-ls-label')).toHaveCount(5);
 		await expect(panel.getByTestId('bridge-sweep-jj-label')).toHaveCount(3);
+		// The text alternative: one row per curve with its two ends.
+		await expect(panel.getByTestId('bridge-sweep-table').locator('tbody tr')).toHaveCount(5);
 		await shot(page, `bridge-sweep-${width}`);
 
 		const filter = panel.getByTestId('bridge-filter');

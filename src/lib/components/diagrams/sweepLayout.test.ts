@@ -64,6 +64,11 @@ describe('sweep curve layout of 2p2', () => {
 			['2p₃/₂²', 2, ['0', '2']]
 		]);
 		expect(right[1].energy - right[0].energy).toBeCloseTo(1.5 * zeta, 6);
+		// Each curve carries its two end energies for the text table: ¹S₀ ends in (3/2)², the top group.
+		const S = layout.curves.find((c) => c.lsText === '¹S₀')!;
+		expect(S.jjText).toBe('2p₃/₂²');
+		expect(S.jjEnergy).toBeCloseTo(right[2].energy, 9);
+		expect(S.lsEnergy).toBeCloseTo(layout.left.find((l) => l.text === '¹S₀')!.energy, 9);
 		expect(right[2].energy - right[1].energy).toBeCloseTo(1.5 * zeta, 6);
 	});
 

@@ -39,6 +39,9 @@ export interface SweepCurveLayout {
 	polyline: string;
 	lsText: string;
 	jjText: string;
+	/** cm⁻¹ at the LS end (t = 0) and at the jj end (t = 1). */
+	lsEnergy: number;
+	jjEnergy: number;
 }
 
 export interface SweepLabel {
@@ -144,7 +147,9 @@ export function sweepLayout(sweep: SweepInput, js: readonly string[] | null, box
 			points,
 			polyline: points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' '),
 			lsText: c.lsLabel ? sweepLsText(c.lsLabel, c.J, odd) : `J = ${c.J}`,
-			jjText: sweepJjText(c.jjLabel)
+			jjText: sweepJjText(c.jjLabel),
+			lsEnergy: c.energies[0],
+			jjEnergy: c.energies[c.energies.length - 1]
 		};
 	});
 
