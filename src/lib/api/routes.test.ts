@@ -26,7 +26,7 @@ describe('the /api/v1 route list', () => {
 	const inTree = routesInTree().sort();
 	const listed = API_ROUTES.map(routeKey).sort();
 
-	it('lists every method that a +server.ts exports (add new routes to src/lib/api/routes.ts and types.ts)', () => {
+	it('lists every method that a +server.ts exports (add new routes to src/lib/api/routes.json and types.ts)', () => {
 		expect(inTree.filter((k) => !listed.includes(k))).toEqual([]);
 	});
 
