@@ -63,3 +63,33 @@ export function presetsFor(ids: readonly string[]): ParameterPreset[] {
 	const key = [...ids].sort().join('|');
 	return LITERATURE_PRESETS.filter((p) => [...p.ids].sort().join('|') === key);
 }
+
+/** The name the Energy solver gives its round-number start (the form's "typical" choice). */
+export const TYPICAL_NAME = 'Typical magnitudes (no particular ion)';
+
+/** "[Ne] 2p2" or "2p2  3s" → "2p2" / "2p2 3s": the open subshells as the presets' `config` names them. */
+function openPart(config: string): string {
+	return config
+		.replace(/\[[A-Za-z]+\]/g, '')
+		.replace(/\s+/g, ' ')
+		.trim();
+}
+
+/**
+ * The literature set the Energy solver starts from by itself for a configuration: one of `presets`
+ * derived for exactly this configuration (typed `asked`, or as the engine wrote it, `engine`), else
+ * null (typical magnitudes). 3d³ does not start from the V³⁺ 3d² values; they stay in the list.
+ */
+export function startingPreset(presets: readonly ParameterPreset[], asked: string, engine: string): ParameterPreset | null {
+	const open = openPart(asked);
+	return presets.find((p) => p.config === open || p.config === engine) ?? null;
+}
+
+/**
+ * The form's values for `ids` from a preset: its own value, else a typical one (a saved set gives a
+ * missing id 0, as the engine reads it). `null` gives typical magnitudes throughout.
+ */
+export function presetValues(ids: readonly string[], preset: ParameterPreset | null): Record<string, number> {
+	const own = preset?.source === 'saved';
+	return Object.fromEntries(ids.map((p) => [p, preset?.values[p] ?? (own ? 0 : typicalValue(p))]));
+}
