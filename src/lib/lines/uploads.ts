@@ -22,6 +22,7 @@ export const UPLOAD_LIMITS_TEXT = `at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB 
 export const LEVEL_UPLOAD_COLUMNS = ['energy', 'uncertainty', 'J', 'parity', 'configuration', 'term', 'g'] as const;
 export const LINE_UPLOAD_COLUMNS = ['wavelength', 'unit', 'medium', 'uncertainty', 'intensity', 'comment'] as const;
 
+/** A level as read from a file: energy in cm⁻¹ and its digits as typed, J as text ("3/2"). Also its API JSON. */
 export interface UploadedLevel {
 	energy: number;
 	/** The energy's digits as typed. */
@@ -34,6 +35,7 @@ export interface UploadedLevel {
 	g: number | null;
 }
 
+/** A line as read from a file (wavelength with its digits as typed); the uncertainty is in the line's unit. Also its API JSON. */
 export interface UploadedLine {
 	wavelength: number;
 	wavelengthText: string;
