@@ -73,9 +73,9 @@ test('an editor proposes, cannot confirm their own note, another editor confirms
 	await expect(waiting).not.toContainText('(you');
 	await shot(rita.page, 'review-awaiting');
 	await ed.page.goto(projectUrl);
-	await expect(ed.page.getByTestId('awaiting-review').locator('tr[data-level="3P#1|1"]')).toContainText(
-		'you: another editor or an owner confirms it'
-	);
+	const own = ed.page.getByTestId('awaiting-review').locator('tr[data-level="3P#1|1"]');
+	await expect(own).toContainText('(you)');
+	await expect(own.getByTitle('You proposed it: another editor or an owner confirms it')).toBeVisible();
 	await viewer.page.goto(projectUrl);
 	await expect(viewer.page.getByTestId('shelf-list')).toContainText('O III ground');
 	await expect(viewer.page.getByTestId('awaiting-review')).toHaveCount(0);
