@@ -15,6 +15,7 @@ import type { FinderResult } from '$lib/physics/finder';
 import type { MatchResult, Tolerance } from '$lib/physics/matcher';
 import type { TransitionType } from '$lib/physics/transitions';
 import type { LevelInput, LineInput } from '$lib/lines/lists';
+import type { UploadedLevel, UploadedLine } from '$lib/lines/uploads';
 
 /** Every failure: status 4xx/5xx with this body. */
 export interface ApiErrorBody {
@@ -502,17 +503,8 @@ export interface LineListJson {
 	createdBy: string | null;
 }
 
-/** A level as read from a file: energy in cm⁻¹ and its digits as typed, J as text ("3/2"). */
-export interface UploadedLevelJson {
-	energy: number;
-	energyText: string;
-	uncertainty: number | null;
-	J: string;
-	parity: 'even' | 'odd';
-	configuration: string;
-	term: string;
-	g: number | null;
-}
+/** A level as read from a file; its JSON is the parsed row as it is (one definition, in $lib/lines/uploads). */
+export type UploadedLevelJson = UploadedLevel;
 
 export interface LevelRowJson extends UploadedLevelJson {
 	id: number;
@@ -520,16 +512,8 @@ export interface LevelRowJson extends UploadedLevelJson {
 	position: number;
 }
 
-/** A line as read from a file; the uncertainty is in the line's unit. */
-export interface UploadedLineJson {
-	wavelength: number;
-	wavelengthText: string;
-	unit: 'A' | 'nm' | 'cm-1';
-	medium: 'air' | 'vacuum';
-	uncertainty: number | null;
-	intensity: number | null;
-	comment: string;
-}
+/** A line as read from a file; its JSON is the parsed row as it is (one definition, in $lib/lines/uploads). */
+export type UploadedLineJson = UploadedLine;
 
 export interface LineRowJson extends UploadedLineJson {
 	id: number;

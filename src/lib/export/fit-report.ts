@@ -20,28 +20,19 @@ export function latexParameter(id: string): string {
 const cm = (v: number | null) => (v === null ? null : (Math.abs(v) < 0.005 ? 0 : v).toFixed(2));
 const math = (v: number | null) => (v === null ? '--' : `$${cm(v)}$`);
 
+/** A right-aligned column of energies in cm⁻¹: to 0.01 in CSV and LaTeX, unrounded in JSON. */
+function cmColumn<T>(key: string, latex: string, get: (row: T) => number | null): Column<T> {
+	return { key, latex, align: 'r', value: (row) => cm(get(row)), jsonValue: get, latexValue: (row) => math(get(row)) };
+}
+
 /** The status in words: free, fixed, or linked to another parameter at a ratio. */
 const statusText = (p: FittedParameter) =>
 	p.status === 'varied' ? `free${p.atBound ? ' (at bound)' : ''}` : p.status === 'linked' ? `linked to ${p.linkedTo}` : 'fixed';
 
 export const fitParameterColumns: Column<FittedParameter>[] = [
 	{ key: 'parameter', latex: 'Parameter', value: (p) => p.id, latexValue: (p) => latexParameter(p.id) },
-	{
-		key: 'value_cm-1',
-		latex: 'Value (cm$^{-1}$)',
-		align: 'r',
-		value: (p) => cm(p.value),
-		jsonValue: (p) => p.value,
-		latexValue: (p) => math(p.value)
-	},
-	{
-		key: 'sigma_cm-1',
-		latex: '$\\sigma$ (cm$^{-1}$)',
-		align: 'r',
-		value: (p) => cm(p.sigma),
-		jsonValue: (p) => p.sigma,
-		latexValue: (p) => math(p.sigma)
-	},
+	cmColumn('value_cm-1', 'Value (cm$^{-1}$)', (p) => p.value),
+	cmColumn('sigma_cm-1', '$\\sigma$ (cm$^{-1}$)', (p) => p.sigma),
 	{
 		key: 'status',
 		latex: 'Status',
@@ -63,28 +54,7 @@ export const fitResidualColumns: Column<FitResidual>[] = [
 	{ key: 'J', latex: '$J$', align: 'r', value: (r) => r.J, latexValue: (r) => `$${r.J}$` },
 	{ key: 'rank_in_J', inLatex: false, value: (r) => r.rank },
 	{ key: 'label', latex: 'Leading term', value: (r) => r.label, latexValue: (r) => latexLabel(r.label) },
-	{
-		key: 'observed_cm-1',
-		latex: '$E_\\mathrm{obs}$',
-		align: 'r',
-		value: (r) => cm(r.observed),
-		jsonValue: (r) => r.observed,
-		latexValue: (r) => math(r.observed)
-	},
-	{
-		key: 'calculated_cm-1',
-		latex: '$E_\\mathrm{calc}$',
-		align: 'r',
-		value: (r) => cm(r.calculated),
-		jsonValue: (r) => r.calculated,
-		latexValue: (r) => math(r.calculated)
-	},
-	{
-		key: 'obs-calc_cm-1',
-		latex: '$E_\\mathrm{obs}-E_\\mathrm{calc}$',
-		align: 'r',
-		value: (r) => cm(r.residual),
-		jsonValue: (r) => r.residual,
-		latexValue: (r) => math(r.residual)
-	}
+	cmColumn('observed_cm-1', '$E_\\mathrm{obs}$', (r) => r.observed),
+	cmColumn('calculated_cm-1', '$E_\\mathrm{calc}$', (r) => r.calculated),
+	cmColumn('obs-calc_cm-1', '$E_\\mathrm{obs}-E_\\mathrm{calc}$', (r) => r.residual)
 ];

@@ -22,6 +22,7 @@ export const UPLOAD_LIMITS_TEXT = `at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB 
 export const LEVEL_UPLOAD_COLUMNS = ['energy', 'uncertainty', 'J', 'parity', 'configuration', 'term', 'g'] as const;
 export const LINE_UPLOAD_COLUMNS = ['wavelength', 'unit', 'medium', 'uncertainty', 'intensity', 'comment'] as const;
 
+/** A level as read from a file: energy in cm⁻¹ and its digits as typed, J as text ("3/2"). Also its API JSON. */
 export interface UploadedLevel {
 	energy: number;
 	/** The energy's digits as typed. */
@@ -34,6 +35,7 @@ export interface UploadedLevel {
 	g: number | null;
 }
 
+/** A line as read from a file (wavelength with its digits as typed); the uncertainty is in the line's unit. Also its API JSON. */
 export interface UploadedLine {
 	wavelength: number;
 	wavelengthText: string;
@@ -64,6 +66,17 @@ function textCell(cell: string | undefined, column: string, bad: (column: string
 	return t;
 }
 
+/** A CSV upload within the upload limits, each data row read by `readRow` (which reports its problems to `bad`). */
+function readUpload<T>(
+	text: string,
+	required: readonly string[],
+	known: readonly string[],
+	readRow: (r: Record<string, string>, bad: (column: string, message: string) => void) => T
+): Parsed<T> {
+	const { data, problems } = table(text, required, known, { maxChars: MAX_UPLOAD_BYTES, maxRows: MAX_UPLOAD_ROWS });
+	return collect(data, problems, readRow, MAX_UPLOAD_PROBLEMS);
+}
+
 const J_TEXT = /^(\d{1,3})(\/2)?$|^\d{1,3}\.5$/;
 
 /** "1.5" → "3/2"; "3/2", "2" as they are. */
@@ -75,49 +88,40 @@ const jText = (t: string) => (t.endsWith('.5') ? `${Number(t) * 2}/2` : t);
  * @example parseLevelUpload('energy,J,parity\n0,0,even').rows[0].energyText // '0'
  */
 export function parseLevelUpload(text: string): Parsed<UploadedLevel> {
-	const { data, problems } = table(text, ['energy', 'J', 'parity'], LEVEL_UPLOAD_COLUMNS, {
-		maxChars: MAX_UPLOAD_BYTES,
-		maxRows: MAX_UPLOAD_ROWS
-	});
-	return collect(
-		data,
-		problems,
-		(r, bad) => {
-			const energyText = (r.energy ?? '').trim();
-			const energy = decimal(r.energy);
-			if (energy === null || Number.isNaN(energy)) bad('energy', `energy "${energyText}" must be a number of cm⁻¹ such as 15840.6`);
-			const u = decimal(r.uncertainty);
-			if (u !== null && (Number.isNaN(u) || u < 0)) bad('uncertainty', `uncertainty "${r.uncertainty}" must be a number ≥ 0 (cm⁻¹)`);
-			const J = (r.J ?? '').trim();
-			if (!J_TEXT.test(J)) bad('J', `J "${J}" must be 0, 1, 2, … or a half-integer such as 3/2 (or 1.5)`);
-			const p = (r.parity ?? '').trim().toLowerCase();
-			const parity = p === 'e' || p === 'even' ? 'even' : p === 'o' || p === 'odd' ? 'odd' : null;
-			if (!parity) bad('parity', `parity "${r.parity ?? ''}" must be even or odd (e or o)`);
-			const configuration = textCell(r.configuration, 'configuration', bad);
-			const term = textCell(r.term, 'term', bad);
-			if (term) {
-				try {
-					const t = parseTermSymbol(term);
-					if (t.parity === 'odd' && parity === 'even') bad('term', `the term "${term}" is marked odd (°) but the parity is even`);
-				} catch (e) {
-					bad('term', (e as Error).message);
-				}
+	return readUpload(text, ['energy', 'J', 'parity'], LEVEL_UPLOAD_COLUMNS, (r, bad) => {
+		const energyText = (r.energy ?? '').trim();
+		const energy = decimal(r.energy);
+		if (energy === null || Number.isNaN(energy)) bad('energy', `energy "${energyText}" must be a number of cm⁻¹ such as 15840.6`);
+		const u = decimal(r.uncertainty);
+		if (u !== null && (Number.isNaN(u) || u < 0)) bad('uncertainty', `uncertainty "${r.uncertainty}" must be a number ≥ 0 (cm⁻¹)`);
+		const J = (r.J ?? '').trim();
+		if (!J_TEXT.test(J)) bad('J', `J "${J}" must be 0, 1, 2, … or a half-integer such as 3/2 (or 1.5)`);
+		const p = (r.parity ?? '').trim().toLowerCase();
+		const parity = p === 'e' || p === 'even' ? 'even' : p === 'o' || p === 'odd' ? 'odd' : null;
+		if (!parity) bad('parity', `parity "${r.parity ?? ''}" must be even or odd (e or o)`);
+		const configuration = textCell(r.configuration, 'configuration', bad);
+		const term = textCell(r.term, 'term', bad);
+		if (term) {
+			try {
+				const t = parseTermSymbol(term);
+				if (t.parity === 'odd' && parity === 'even') bad('term', `the term "${term}" is marked odd (°) but the parity is even`);
+			} catch (e) {
+				bad('term', (e as Error).message);
 			}
-			const g = decimal(r.g);
-			if (g !== null && Number.isNaN(g)) bad('g', `g "${r.g}" must be a number such as 1.5`);
-			return {
-				energy: energy as number,
-				energyText,
-				uncertainty: u,
-				J: jText(J),
-				parity: parity ?? 'even',
-				configuration,
-				term,
-				g
-			};
-		},
-		MAX_UPLOAD_PROBLEMS
-	);
+		}
+		const g = decimal(r.g);
+		if (g !== null && Number.isNaN(g)) bad('g', `g "${r.g}" must be a number such as 1.5`);
+		return {
+			energy: energy as number,
+			energyText,
+			uncertainty: u,
+			J: jText(J),
+			parity: parity ?? 'even',
+			configuration,
+			term,
+			g
+		};
+	});
 }
 
 const UNITS: Record<string, UploadedLine['unit']> = { a: 'A', å: 'A', nm: 'nm', 'cm-1': 'cm-1', 'cm⁻¹': 'cm-1' };
@@ -128,46 +132,37 @@ const UNITS: Record<string, UploadedLine['unit']> = { a: 'A', å: 'A', nm: 'nm',
  * @example parseLineUpload('wavelength,unit,medium\n5000.1,A,air').rows[0].unit // 'A'
  */
 export function parseLineUpload(text: string): Parsed<UploadedLine> {
-	const { data, problems } = table(text, ['wavelength', 'unit', 'medium'], LINE_UPLOAD_COLUMNS, {
-		maxChars: MAX_UPLOAD_BYTES,
-		maxRows: MAX_UPLOAD_ROWS
-	});
-	return collect(
-		data,
-		problems,
-		(r, bad) => {
-			const wavelengthText = (r.wavelength ?? '').trim();
-			const w = decimal(r.wavelength);
-			if (w === null || Number.isNaN(w) || w <= 0) bad('wavelength', `wavelength "${wavelengthText}" must be a positive number`);
-			const unitText = (r.unit ?? '').trim();
-			const unit = UNITS[unitText.toLowerCase()];
-			if (!unit) bad('unit', `unit "${unitText}" must be A (or Å), nm or cm-1`);
-			const medium = (r.medium ?? '').trim().toLowerCase();
-			if (medium !== 'air' && medium !== 'vacuum') bad('medium', `medium "${r.medium ?? ''}" must be air or vacuum`);
-			const u = decimal(r.uncertainty);
-			if (u !== null && (Number.isNaN(u) || u < 0))
-				bad('uncertainty', `uncertainty "${r.uncertainty}" must be a number ≥ 0 (in the line's unit)`);
-			const intensity = decimal(r.intensity);
-			if (intensity !== null && (Number.isNaN(intensity) || intensity < 0))
-				bad('intensity', `intensity "${r.intensity}" must be a number ≥ 0`);
-			if (w !== null && w > 0 && unit && unit !== 'cm-1' && medium === 'air') {
-				try {
-					toVacuumAngstrom(w, unit, 'air');
-				} catch (e) {
-					bad('medium', (e as Error).message);
-				}
+	return readUpload(text, ['wavelength', 'unit', 'medium'], LINE_UPLOAD_COLUMNS, (r, bad) => {
+		const wavelengthText = (r.wavelength ?? '').trim();
+		const w = decimal(r.wavelength);
+		if (w === null || Number.isNaN(w) || w <= 0) bad('wavelength', `wavelength "${wavelengthText}" must be a positive number`);
+		const unitText = (r.unit ?? '').trim();
+		const unit = UNITS[unitText.toLowerCase()];
+		if (!unit) bad('unit', `unit "${unitText}" must be A (or Å), nm or cm-1`);
+		const medium = (r.medium ?? '').trim().toLowerCase();
+		if (medium !== 'air' && medium !== 'vacuum') bad('medium', `medium "${r.medium ?? ''}" must be air or vacuum`);
+		const u = decimal(r.uncertainty);
+		if (u !== null && (Number.isNaN(u) || u < 0))
+			bad('uncertainty', `uncertainty "${r.uncertainty}" must be a number ≥ 0 (in the line's unit)`);
+		const intensity = decimal(r.intensity);
+		if (intensity !== null && (Number.isNaN(intensity) || intensity < 0))
+			bad('intensity', `intensity "${r.intensity}" must be a number ≥ 0`);
+		if (w !== null && w > 0 && unit && unit !== 'cm-1' && medium === 'air') {
+			try {
+				toVacuumAngstrom(w, unit, 'air');
+			} catch (e) {
+				bad('medium', (e as Error).message);
 			}
-			const comment = textCell(r.comment, 'comment', bad);
-			return {
-				wavelength: w as number,
-				wavelengthText,
-				unit: unit ?? 'A',
-				medium: medium === 'air' ? 'air' : 'vacuum',
-				uncertainty: u,
-				intensity,
-				comment
-			};
-		},
-		MAX_UPLOAD_PROBLEMS
-	);
+		}
+		const comment = textCell(r.comment, 'comment', bad);
+		return {
+			wavelength: w as number,
+			wavelengthText,
+			unit: unit ?? 'A',
+			medium: medium === 'air' ? 'air' : 'vacuum',
+			uncertainty: u,
+			intensity,
+			comment
+		};
+	});
 }

@@ -3,12 +3,78 @@
  * SQL migrations in drizzle/ from this file (`npm run db:generate`).
  */
 import { sql } from 'drizzle-orm';
-import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex, type AnySQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { ACTIVITY_KIND_NAMES, type ActivityKind } from '../../activity';
 import { NOTE_CHANGE_NAMES, type NoteChange } from '../../review';
 import type { FitResult } from '../../physics/fit';
 
 const now = sql`(unixepoch() * 1000)`;
+
+// Column builders for the columns many tables share. Each call makes a fresh column (Drizzle
+// columns belong to one table); the SQL they generate is the same as when written out.
+
+/** A time in milliseconds since the epoch (Drizzle gives a Date). */
+const timeMs = (name: string) => integer(name, { mode: 'timestamp_ms' });
+/** A time stamped by SQLite when the row is written. */
+const stampedAt = (name: string) => timeMs(name).notNull().default(now);
+/** A person who did something to the row; the row stays (with null) when the account goes. */
+const userWho = (name: string) => text(name).references(() => users.id, { onDelete: 'set null' });
+/** The account the row belongs to; the row goes with the account. */
+const ownerUserId = () =>
+	text('user_id')
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' });
+/** The project the row belongs to; the row goes with the project. */
+const ownerProjectId = () =>
+	text('project_id')
+		.notNull()
+		.references(() => projects.id, { onDelete: 'cascade' });
+/** The Shelf entry the row belongs to; the row goes with the entry. */
+const ownerEntryId = () =>
+	text('entry_id')
+		.notNull()
+		.references(() => shelfEntries.id, { onDelete: 'cascade' });
+/** Optimistic locking: a change sends the version it read (409 when stale). */
+const versionColumn = () => integer('version').notNull().default(1);
+/** Who made the row and when. */
+const createdColumns = () => ({ createdBy: userWho('created_by'), createdAt: stampedAt('created_at') });
+/** Who last changed the row and when. */
+const updatedColumns = () => ({ updatedBy: userWho('updated_by'), updatedAt: stampedAt('updated_at') });
+/** What a level note says: which level (its key) and the observed values, each with its digits as typed. */
+const noteLevelColumns = () => ({
+	levelKey: text('level_key').notNull(),
+	/** Observed energy in cm⁻¹ above the ground level. */
+	observedEnergy: real('observed_energy'),
+	/** The observed energy's digits as typed ("1880", "19500.12345", "-12400"); shown and exported as is. */
+	observedEnergyText: text('observed_energy_text'),
+	/** One-sigma uncertainty of the observed energy, cm⁻¹. */
+	uncertainty: real('uncertainty'),
+	uncertaintyText: text('uncertainty_text')
+});
+const detachedColumns = () => ({
+	/**
+	 * True when the entry's configuration changed after the note was written: the note keeps its
+	 * old level key and waits to be reattached to a level of the new configuration, or deleted.
+	 */
+	detached: integer('detached', { mode: 'boolean' }).notNull().default(false),
+	/** The configuration (as typed) the note was written for, when detached. */
+	detachedFrom: text('detached_from')
+});
+/** The head of a saved list: its id, project and name. */
+const listHeadColumns = () => ({ id: text('id').primaryKey(), projectId: ownerProjectId(), name: text('name').notNull() });
+/** The tail of a saved list: how many rows it holds, its version, who made it and when. */
+const listTailColumns = () => ({
+	rowCount: integer('row_count').notNull().default(0),
+	version: versionColumn(),
+	...createdColumns()
+});
+/** A row of a saved list: its own id, the list it belongs to (and goes with), its place in the list. */
+const listRowHeadColumns = (list: () => AnySQLiteColumn) => ({
+	id: integer('id').primaryKey({ autoIncrement: true }),
+	listId: text('list_id').notNull().references(list, { onDelete: 'cascade' }),
+	/** 1 = the file's first data row; the order of the list. */
+	position: integer('position').notNull()
+});
 
 export const SITE_ROLES = ['admin', 'member'] as const;
 export type SiteRole = (typeof SITE_ROLES)[number];
@@ -25,7 +91,7 @@ export const users = sqliteTable('users', {
 	name: text('name').notNull(),
 	passwordHash: text('password_hash').notNull(),
 	siteRole: text('site_role', { enum: SITE_ROLES }).notNull().default('member'),
-	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	createdAt: stampedAt('created_at')
 });
 
 /** Lucia's session table: id, user_id, expires_at (seconds since the epoch). */
@@ -33,9 +99,7 @@ export const sessions = sqliteTable(
 	'sessions',
 	{
 		id: text('id').primaryKey(),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: ownerUserId(),
 		expiresAt: integer('expires_at').notNull()
 	},
 	(t) => [index('sessions_user_idx').on(t.userId)]
@@ -45,22 +109,18 @@ export const projects = sqliteTable('projects', {
 	id: text('id').primaryKey(),
 	name: text('name').notNull(),
 	description: text('description').notNull().default(''),
-	createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
-	updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	createdBy: userWho('created_by'),
+	createdAt: stampedAt('created_at'),
+	updatedAt: stampedAt('updated_at')
 });
 
 export const memberships = sqliteTable(
 	'memberships',
 	{
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		projectId: ownerProjectId(),
+		userId: ownerUserId(),
 		role: text('role', { enum: PROJECT_ROLES }).notNull(),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		createdAt: stampedAt('created_at')
 	},
 	(t) => [primaryKey({ columns: [t.projectId, t.userId] }), index('memberships_user_idx').on(t.userId)]
 );
@@ -70,9 +130,7 @@ export const shelfEntries = sqliteTable(
 	'shelf_entries',
 	{
 		id: text('id').primaryKey(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
+		projectId: ownerProjectId(),
 		title: text('title').notNull(),
 		species: text('species').notNull().default(''),
 		/** The notation exactly as the user typed it. */
@@ -80,11 +138,9 @@ export const shelfEntries = sqliteTable(
 		notes: text('notes').notNull().default(''),
 		/** JSON array of tag strings. */
 		tags: text('tags', { mode: 'json' }).$type<string[]>().notNull().default([]),
-		version: integer('version').notNull().default(1),
-		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
-		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now),
+		version: versionColumn(),
+		...createdColumns(),
+		...updatedColumns(),
 		/**
 		 * Derived from the notation when it is saved, so the library can filter in SQL: the parity
 		 * 'even' or 'odd' ('' when the notation no longer parses), null until computed.
@@ -108,34 +164,18 @@ export const levelAnnotations = sqliteTable(
 	'level_annotations',
 	{
 		id: text('id').primaryKey(),
-		entryId: text('entry_id')
-			.notNull()
-			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
-		levelKey: text('level_key').notNull(),
-		/** Observed energy in cm⁻¹ above the ground level. */
-		observedEnergy: real('observed_energy'),
-		/** The observed energy's digits as typed ("1880", "19500.12345", "-12400"); shown and exported as is. */
-		observedEnergyText: text('observed_energy_text'),
-		/** One-sigma uncertainty of the observed energy, cm⁻¹. */
-		uncertainty: real('uncertainty'),
-		uncertaintyText: text('uncertainty_text'),
-		/**
-		 * True when the entry's configuration changed after the note was written: the note keeps its
-		 * old level key and waits to be reattached to a level of the new configuration, or deleted.
-		 */
-		detached: integer('detached', { mode: 'boolean' }).notNull().default(false),
-		/** The configuration (as typed) the note was written for, when detached. */
-		detachedFrom: text('detached_from'),
+		entryId: ownerEntryId(),
+		...noteLevelColumns(),
+		...detachedColumns(),
 		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull().default('proposed'),
 		comment: text('comment').notNull().default(''),
-		version: integer('version').notNull().default(1),
+		version: versionColumn(),
 		/**
 		 * Who proposed the note's present values (energy, uncertainty, level): the review rule
 		 * (src/lib/review.ts) lets anyone but this person confirm it.
 		 */
-		proposedBy: text('proposed_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		proposedBy: userWho('proposed_by'),
+		...updatedColumns()
 	},
 	// One attached note per level; detached notes may share a key with a note of the new configuration.
 	(t) => [
@@ -158,27 +198,18 @@ export const levelAnnotationHistory = sqliteTable(
 	{
 		id: integer('id').primaryKey({ autoIncrement: true }),
 		annotationId: text('annotation_id').notNull(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
-		entryId: text('entry_id')
-			.notNull()
-			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
-		levelKey: text('level_key').notNull(),
-		observedEnergy: real('observed_energy'),
-		observedEnergyText: text('observed_energy_text'),
-		uncertainty: real('uncertainty'),
-		uncertaintyText: text('uncertainty_text'),
+		projectId: ownerProjectId(),
+		entryId: ownerEntryId(),
+		...noteLevelColumns(),
 		status: text('status', { enum: ASSIGNMENT_STATUSES }).notNull(),
 		comment: text('comment').notNull().default(''),
-		detached: integer('detached', { mode: 'boolean' }).notNull().default(false),
-		detachedFrom: text('detached_from'),
+		...detachedColumns(),
 		version: integer('version').notNull(),
-		proposedBy: text('proposed_by').references(() => users.id, { onDelete: 'set null' }),
+		proposedBy: userWho('proposed_by'),
 		change: text('change', { enum: NOTE_CHANGE_NAMES as [NoteChange, ...NoteChange[]] }).notNull(),
-		actorId: text('actor_id').references(() => users.id, { onDelete: 'set null' }),
+		actorId: userWho('actor_id'),
 		actorName: text('actor_name').notNull(),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		createdAt: stampedAt('created_at')
 	},
 	(t) => [index('annotation_history_note_idx').on(t.annotationId, t.id), index('annotation_history_project_idx').on(t.projectId, t.id)]
 );
@@ -201,16 +232,14 @@ export const outbox = sqliteTable('outbox', {
 	status: text('status', { enum: MAIL_STATUSES }).notNull().default('caught'),
 	/** Why a send failed (the transport's words, with no credentials). */
 	error: text('error'),
-	createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+	createdAt: stampedAt('created_at')
 });
 
 /** One-time password reset links; only the SHA-256 of the token is stored. */
 export const passwordResets = sqliteTable('password_resets', {
 	tokenHash: text('token_hash').primaryKey(),
-	userId: text('user_id')
-		.notNull()
-		.references(() => users.id, { onDelete: 'cascade' }),
-	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull()
+	userId: ownerUserId(),
+	expiresAt: timeMs('expires_at').notNull()
 });
 
 /** Personal API tokens for scripts (`Authorization: Bearer tw_…`); only the SHA-256 is stored. */
@@ -218,13 +247,11 @@ export const apiTokens = sqliteTable(
 	'api_tokens',
 	{
 		id: text('id').primaryKey(),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: ownerUserId(),
 		name: text('name').notNull(),
 		tokenHash: text('token_hash').notNull().unique(),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
-		lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' })
+		createdAt: stampedAt('created_at'),
+		lastUsedAt: timeMs('last_used_at')
 	},
 	(t) => [index('api_tokens_user_idx').on(t.userId)]
 );
@@ -239,15 +266,13 @@ export const activityLog = sqliteTable(
 	'activity_log',
 	{
 		id: integer('id').primaryKey({ autoIncrement: true }),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
-		actorId: text('actor_id').references(() => users.id, { onDelete: 'set null' }),
+		projectId: ownerProjectId(),
+		actorId: userWho('actor_id'),
 		actorName: text('actor_name').notNull(),
 		kind: text('kind', { enum: ACTIVITY_KIND_NAMES as [ActivityKind, ...ActivityKind[]] }).notNull(),
 		summary: text('summary').notNull(),
 		subject: text('subject'),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		createdAt: stampedAt('created_at')
 	},
 	// The log page reads a project newest first (by id), optionally one person's or one kind's.
 	(t) => [
@@ -267,23 +292,21 @@ export const invitations = sqliteTable(
 	'invitations',
 	{
 		id: text('id').primaryKey(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
+		projectId: ownerProjectId(),
 		email: text('email').notNull(),
 		role: text('role', { enum: PROJECT_ROLES }).notNull(),
 		tokenHash: text('token_hash').notNull().unique(),
-		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		invitedBy: userWho('invited_by'),
 		/** Whether the last mail with the link reached the mail server. */
 		mailStatus: text('mail_status', { enum: ['sent', 'failed'] })
 			.notNull()
 			.default('sent'),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
-		sentAt: integer('sent_at', { mode: 'timestamp_ms' }).notNull().default(now),
-		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
-		acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
-		acceptedBy: text('accepted_by').references(() => users.id, { onDelete: 'set null' }),
-		revokedAt: integer('revoked_at', { mode: 'timestamp_ms' })
+		createdAt: stampedAt('created_at'),
+		sentAt: stampedAt('sent_at'),
+		expiresAt: timeMs('expires_at').notNull(),
+		acceptedAt: timeMs('accepted_at'),
+		acceptedBy: userWho('accepted_by'),
+		revokedAt: timeMs('revoked_at')
 	},
 	(t) => [index('invitations_project_idx').on(t.projectId, t.email)]
 );
@@ -305,18 +328,14 @@ export const parameterSets = sqliteTable(
 	'parameter_sets',
 	{
 		id: text('id').primaryKey(),
-		entryId: text('entry_id')
-			.notNull()
-			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		entryId: ownerEntryId(),
 		name: text('name').notNull(),
 		notation: text('notation').notNull(),
 		parameters: text('parameters', { mode: 'json' }).$type<StoredEnergyParameters>().notNull(),
 		comment: text('comment').notNull().default(''),
-		version: integer('version').notNull().default(1),
-		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now),
-		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		version: versionColumn(),
+		...createdColumns(),
+		...updatedColumns()
 	},
 	(t) => [index('parameter_sets_entry_idx').on(t.entryId, t.updatedAt)]
 );
@@ -341,9 +360,7 @@ export const fitReports = sqliteTable(
 	'fit_reports',
 	{
 		id: text('id').primaryKey(),
-		entryId: text('entry_id')
-			.notNull()
-			.references(() => shelfEntries.id, { onDelete: 'cascade' }),
+		entryId: ownerEntryId(),
 		/** The parameter set the fit started from, if any. */
 		parameterSetId: text('parameter_set_id').references(() => parameterSets.id, { onDelete: 'set null' }),
 		notation: text('notation').notNull(),
@@ -352,8 +369,7 @@ export const fitReports = sqliteTable(
 		result: text('result', { mode: 'json' }).$type<FitResult>().notNull(),
 		rms: real('rms').notNull(),
 		degreesOfFreedom: integer('degrees_of_freedom').notNull(),
-		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		...createdColumns()
 	},
 	(t) => [index('fit_reports_entry_idx').on(t.entryId, t.createdAt)]
 );
@@ -377,17 +393,10 @@ export const IDENTIFICATION_TYPES = ['E1', 'M1', 'E2'] as const;
 export const levelLists = sqliteTable(
 	'level_lists',
 	{
-		id: text('id').primaryKey(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
-		name: text('name').notNull(),
+		...listHeadColumns(),
 		source: text('source', { enum: LEVEL_LIST_SOURCES }).notNull(),
 		sourceEntries: text('source_entries', { mode: 'json' }).$type<string[]>().notNull().default([]),
-		rowCount: integer('row_count').notNull().default(0),
-		version: integer('version').notNull().default(1),
-		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		...listTailColumns()
 	},
 	(t) => [index('level_lists_project_idx').on(t.projectId, t.createdAt)]
 );
@@ -396,12 +405,7 @@ export const levelLists = sqliteTable(
 export const levelListRows = sqliteTable(
 	'level_list_rows',
 	{
-		id: integer('id').primaryKey({ autoIncrement: true }),
-		listId: text('list_id')
-			.notNull()
-			.references(() => levelLists.id, { onDelete: 'cascade' }),
-		/** 1 = the file's first data row; the order of the list. */
-		position: integer('position').notNull(),
+		...listRowHeadColumns(() => levelLists.id),
 		energy: real('energy').notNull(),
 		energyText: text('energy_text').notNull(),
 		uncertainty: real('uncertainty'),
@@ -418,18 +422,11 @@ export const levelListRows = sqliteTable(
 export const lineLists = sqliteTable(
 	'line_lists',
 	{
-		id: text('id').primaryKey(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
-		name: text('name').notNull(),
+		...listHeadColumns(),
 		source: text('source', { enum: ['upload'] })
 			.notNull()
 			.default('upload'),
-		rowCount: integer('row_count').notNull().default(0),
-		version: integer('version').notNull().default(1),
-		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		...listTailColumns()
 	},
 	(t) => [index('line_lists_project_idx').on(t.projectId, t.createdAt)]
 );
@@ -438,11 +435,7 @@ export const lineLists = sqliteTable(
 export const lineListRows = sqliteTable(
 	'line_list_rows',
 	{
-		id: integer('id').primaryKey({ autoIncrement: true }),
-		listId: text('list_id')
-			.notNull()
-			.references(() => lineLists.id, { onDelete: 'cascade' }),
-		position: integer('position').notNull(),
+		...listRowHeadColumns(() => lineLists.id),
 		wavelength: real('wavelength').notNull(),
 		wavelengthText: text('wavelength_text').notNull(),
 		unit: text('unit', { enum: LINE_UNITS }).notNull(),
@@ -464,9 +457,7 @@ export const identifications = sqliteTable(
 	'identifications',
 	{
 		id: text('id').primaryKey(),
-		projectId: text('project_id')
-			.notNull()
-			.references(() => projects.id, { onDelete: 'cascade' }),
+		projectId: ownerProjectId(),
 		lineId: integer('line_id')
 			.notNull()
 			.references(() => lineListRows.id, { onDelete: 'cascade' }),
@@ -481,9 +472,8 @@ export const identifications = sqliteTable(
 		residual: real('residual'),
 		status: text('status', { enum: IDENTIFICATION_STATUSES }).notNull(),
 		note: text('note').notNull().default(''),
-		version: integer('version').notNull().default(1),
-		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
-		updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull().default(now)
+		version: versionColumn(),
+		...updatedColumns()
 	},
 	(t) => [
 		uniqueIndex('identification_pair_idx').on(t.lineId, t.upperLevelId, t.lowerLevelId),

@@ -199,6 +199,35 @@ export function recordChange(
 /** The digits a note holds (notes saved before the digits were kept: the shortest decimal of the number). */
 export const digits = (value: number | null, text: string | null) => text ?? (value === null ? null : numberText(value));
 
+/** A number as sent: its value and its digits as typed. */
+type TypedNumber = { value: number; text: string };
+
+/** The columns a note's save writes: observed energy and uncertainty with their digits, the comment, who and when. */
+export function noteValues(
+	energy: TypedNumber | null | undefined,
+	uncertainty: TypedNumber | null | undefined,
+	comment: string,
+	actorId: string
+) {
+	return {
+		observedEnergy: energy?.value ?? null,
+		observedEnergyText: energy?.text ?? null,
+		uncertainty: uncertainty?.value ?? null,
+		uncertaintyText: uncertainty?.text ?? null,
+		comment,
+		updatedBy: actorId,
+		updatedAt: new Date()
+	};
+}
+
+type SavedValues = Pick<typeof levelAnnotations.$inferSelect, 'observedEnergy' | 'observedEnergyText' | 'uncertainty' | 'uncertaintyText'>;
+
+/** Whether a save gives the note other values (by their digits) than it has; a new note always has new values. */
+export const noteValuesChanged = (current: SavedValues | undefined, values: ReturnType<typeof noteValues>) =>
+	!current ||
+	digits(current.observedEnergy, current.observedEnergyText) !== values.observedEnergyText ||
+	digits(current.uncertainty, current.uncertaintyText) !== values.uncertaintyText;
+
 /**
  * Creates or changes the note on one level. The review rule (src/lib/review.ts) decides the
  * status: a new note cannot be confirmed (400); its proposer cannot confirm it (403); new values
@@ -221,20 +250,8 @@ export function saveAnnotation(actor: Actor, projectId: string, entryId: string,
 				`The note on ${levelText(data.levelKey)} was changed by someone else since you opened it (you had version ${data.version}, it is now ${current.version}); reload and edit again`,
 				{ currentVersion: current.version }
 			);
-		const values = {
-			observedEnergy: data.observedEnergy?.value ?? null,
-			observedEnergyText: data.observedEnergy?.text ?? null,
-			uncertainty: data.uncertainty?.value ?? null,
-			uncertaintyText: data.uncertainty?.text ?? null,
-			comment: data.comment,
-			updatedBy: actor.id,
-			updatedAt: new Date()
-		};
-		const valuesChanged =
-			!current ||
-			digits(current.observedEnergy, current.observedEnergyText) !== values.observedEnergyText ||
-			digits(current.uncertainty, current.uncertaintyText) !== values.uncertaintyText;
-		const review = reviewOutcome(current ?? null, data.status, valuesChanged, actor.id);
+		const values = noteValues(data.observedEnergy, data.uncertainty, data.comment, actor.id);
+		const review = reviewOutcome(current ?? null, data.status, noteValuesChanged(current, values), actor.id);
 		if (!review.ok) throw new ServiceError(review.status, review.message, { field: 'status' });
 		const reviewed = { status: review.status, proposedBy: review.proposedBy };
 		if (!current) {

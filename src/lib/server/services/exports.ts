@@ -3,6 +3,7 @@
  * configuration as typed (with its core), the odd-parity mark °, the energies as typed, and lists
  * the notes detached by a configuration change after the levels. Saved fit reports export the same way.
  */
+import { utcMinuteLabelled } from '../../when';
 import type { Actor } from '../access';
 import { badRequest } from '../errors';
 import { annotatedLevels } from './annotations';
@@ -76,7 +77,7 @@ const FIT_CAUTION =
 export function exportFitReport(actor: Actor, projectId: string, entryId: string, fitId: string, format: ExportFormat) {
 	const { entry, report } = getFitReport(actor, projectId, entryId, fitId);
 	const r = report.result;
-	const when = report.createdAt.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
+	const when = utcMinuteLabelled(report.createdAt);
 	const stats = `rms ${r.rms.toFixed(2)} cm⁻¹, ${r.degreesOfFreedom} degrees of freedom, ${r.residuals.length} levels`;
 	const who = `fitted by ${report.createdBy ?? 'a former member'} on ${when}`;
 	const species = entry.species ? entry.species + ' ' : '';

@@ -159,6 +159,42 @@ function dump(ctx: BackupContext): SectionFile {
 	};
 }
 
+/** The columns every saved list has, for a list of the file restored as `id` in this project. */
+function listValues(
+	l: { name: string; rows: unknown[]; version: number; createdBy: string | null; createdAt: Date },
+	id: string,
+	ctx: BackupContext
+) {
+	return {
+		id,
+		projectId: ctx.projectId,
+		name: l.name,
+		rowCount: l.rows.length,
+		version: l.version,
+		createdBy: ctx.userIdOf(l.createdBy),
+		createdAt: l.createdAt
+	};
+}
+
+/** Writes a list's rows under `listId` and notes each row's new id by the `ref` it had in the file. */
+function restoreRows<T extends typeof levelListRows | typeof lineListRows>(
+	tx: Tx,
+	table: T,
+	listId: string,
+	rows: (Omit<T['$inferInsert'], 'listId'> & { ref: number })[],
+	newIds: Map<number, number>
+) {
+	for (const { ref: old, ...r } of rows) {
+		const row = tx
+			.insert(table)
+			// TypeScript cannot follow a spread of a generic row back to the table's insert type; the row is that type less listId.
+			.values({ listId, ...r } as unknown as T['$inferInsert'])
+			.returning({ id: table.id })
+			.get();
+		newIds.set(old, row.id);
+	}
+}
+
 function restore(tx: Tx, data: Section, ctx: BackupContext) {
 	const { projectId } = ctx;
 	const levelIds = new Map<number, number>();
@@ -167,48 +203,20 @@ function restore(tx: Tx, data: Section, ctx: BackupContext) {
 		const id = newId();
 		tx.insert(levelLists)
 			.values({
-				id,
-				projectId,
-				name: l.name,
+				...listValues(l, id, ctx),
 				source: l.source,
 				// Entries of the file get new ids; a source entry that is not in the file is dropped from the list.
-				sourceEntries: l.sourceEntries.map((e) => ctx.entryIds.get(e)).filter((e): e is string => !!e),
-				rowCount: l.rows.length,
-				version: l.version,
-				createdBy: ctx.userIdOf(l.createdBy),
-				createdAt: l.createdAt
+				sourceEntries: l.sourceEntries.map((e) => ctx.entryIds.get(e)).filter((e): e is string => !!e)
 			})
 			.run();
-		for (const { ref: old, ...r } of l.rows) {
-			const row = tx
-				.insert(levelListRows)
-				.values({ listId: id, ...r })
-				.returning({ id: levelListRows.id })
-				.get();
-			levelIds.set(old, row.id);
-		}
+		restoreRows(tx, levelListRows, id, l.rows, levelIds);
 	}
 	for (const l of data.lineLists) {
 		const id = newId();
 		tx.insert(lineLists)
-			.values({
-				id,
-				projectId,
-				name: l.name,
-				rowCount: l.rows.length,
-				version: l.version,
-				createdBy: ctx.userIdOf(l.createdBy),
-				createdAt: l.createdAt
-			})
+			.values(listValues(l, id, ctx))
 			.run();
-		for (const { ref: old, ...r } of l.rows) {
-			const row = tx
-				.insert(lineListRows)
-				.values({ listId: id, ...r })
-				.returning({ id: lineListRows.id })
-				.get();
-			lineIds.set(old, row.id);
-		}
+		restoreRows(tx, lineListRows, id, l.rows, lineIds);
 	}
 	for (const v of data.identifications) {
 		const lineId = lineIds.get(v.line);

@@ -15,7 +15,7 @@ import { projectAccess, type Actor } from '../access';
 import { badRequest, conflict, ServiceError } from '../errors';
 import { parseInput } from '../validation';
 import { newId } from '../ids';
-import { annotatedLevels, digits, recordChange } from './annotations';
+import { annotatedLevels, noteValues, noteValuesChanged, recordChange } from './annotations';
 import { resolvePaste, type PastePreview } from '../../energyPaste';
 import { levelText } from '../../levels';
 import { reviewOutcome } from '../../review';
@@ -89,22 +89,11 @@ export function pasteNotes(actor: Actor, projectId: string, entryId: string, inp
 					currentVersion: now
 				});
 			}
-			const values = {
-				observedEnergy: row.energy.value,
-				observedEnergyText: row.energy.text,
-				// The old uncertainty belonged to the old value: a line without ± clears it.
-				uncertainty: row.uncertainty?.value ?? null,
-				uncertaintyText: row.uncertainty?.text ?? null,
-				comment: row.comment ?? current?.comment ?? '',
-				updatedBy: actor.id,
-				updatedAt: new Date()
-			};
-			const valuesChanged =
-				!current ||
-				digits(current.observedEnergy, current.observedEnergyText) !== values.observedEnergyText ||
-				digits(current.uncertainty, current.uncertaintyText) !== values.uncertaintyText;
+			// The old uncertainty belonged to the old value: a line without ± clears it.
+			const values = noteValues(row.energy, row.uncertainty, row.comment ?? current?.comment ?? '', actor.id);
+			const changed = noteValuesChanged(current, values);
 			// A paste proposes its values; repeating a note's values is not a new proposal.
-			const review = reviewOutcome(current ?? null, valuesChanged || !current ? 'proposed' : current.status, valuesChanged, actor.id);
+			const review = reviewOutcome(current ?? null, changed || !current ? 'proposed' : current.status, changed, actor.id);
 			// Never refused (a paste does not ask to confirm), but the rule has the last word.
 			if (!review.ok) throw new ServiceError(review.status, review.message, { level: row.levelKey });
 			const reviewed = { status: review.status, proposedBy: review.proposedBy };

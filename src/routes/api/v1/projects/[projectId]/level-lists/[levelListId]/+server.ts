@@ -1,16 +1,9 @@
-import type { RequestHandler } from './$types';
-import { deleteList, getLevelList } from '$lib/server/services/lists';
-import { api, apiActor, reply } from '$lib/server/http';
+import { getLevelList } from '$lib/server/services/lists';
+import { savedListRoute } from '$lib/server/saved-list-route';
 
-export const GET: RequestHandler = api((event) =>
-	reply(
-		'GET /api/v1/projects/:projectId/level-lists/:levelListId',
-		getLevelList(apiActor(event), event.params.projectId, event.params.levelListId)
-	)
-);
+const route = savedListRoute('GET /api/v1/projects/:projectId/level-lists/:levelListId', 'levels', 'levelListId', getLevelList);
 
+/** The list with its levels. */
+export const GET = route.GET;
 /** Deletes the list, its levels and the identifications that use them. */
-export const DELETE: RequestHandler = api((event) => {
-	deleteList(apiActor(event), event.params.projectId, 'levels', event.params.levelListId);
-	return new Response(null, { status: 204 });
-});
+export const DELETE = route.DELETE;

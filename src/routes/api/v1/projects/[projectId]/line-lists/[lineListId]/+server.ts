@@ -1,16 +1,9 @@
-import type { RequestHandler } from './$types';
-import { deleteList, getLineList } from '$lib/server/services/lists';
-import { api, apiActor, reply } from '$lib/server/http';
+import { getLineList } from '$lib/server/services/lists';
+import { savedListRoute } from '$lib/server/saved-list-route';
 
-export const GET: RequestHandler = api((event) =>
-	reply(
-		'GET /api/v1/projects/:projectId/line-lists/:lineListId',
-		getLineList(apiActor(event), event.params.projectId, event.params.lineListId)
-	)
-);
+const route = savedListRoute('GET /api/v1/projects/:projectId/line-lists/:lineListId', 'lines', 'lineListId', getLineList);
 
+/** The list with its lines. */
+export const GET = route.GET;
 /** Deletes the list, its lines and their identifications. */
-export const DELETE: RequestHandler = api((event) => {
-	deleteList(apiActor(event), event.params.projectId, 'lines', event.params.lineListId);
-	return new Response(null, { status: 204 });
-});
+export const DELETE = route.DELETE;
