@@ -5,8 +5,8 @@
  * crashed the server for every viewer). Limits: src/lib/physics/budget.ts (common practice, no source).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
+import { refusal } from './status-of';
 import { eq } from 'drizzle-orm';
-import { ServiceError } from './errors';
 import type { Actor } from './access';
 import { db } from './db';
 import { shelfEntries } from './db/schema';
@@ -24,19 +24,9 @@ beforeAll(async () => {
 	projectId = createProject(owner, { name: 'Budgets' }).id;
 });
 
-function failure(call: () => unknown): ServiceError {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return e;
-		throw e;
-	}
-	throw new Error('expected a ServiceError');
-}
-
 describe('Shelf entries and the engine budgets', () => {
 	it('saving 12o23 is refused with a 400 that names the limit', () => {
-		const e = failure(() => createEntry(owner, projectId, { title: 'huge', species: '', notation: '12o23' }));
+		const e = refusal(() => createEntry(owner, projectId, { title: 'huge', species: '', notation: '12o23' }));
 		expect(e.status).toBe(400);
 		expect(e.message).toMatch(/over the limit of 15000/);
 		expect(e.details).toMatchObject({ field: 'notation' });
@@ -44,14 +34,14 @@ describe('Shelf entries and the engine budgets', () => {
 
 	it(`a configuration with more than ${MAX_ENTRY_LEVELS} single levels is refused (4f7 5d3 6p3 has 668 300)`, () => {
 		// 668 300 levels of 4f7 5d3 6p3: counted with multiplicity (sum over terms of count × number of J).
-		const e = failure(() => createEntry(owner, projectId, { title: 'many levels', species: '', notation: '4f7 5d3 6p3' }));
+		const e = refusal(() => createEntry(owner, projectId, { title: 'many levels', species: '', notation: '4f7 5d3 6p3' }));
 		expect(e.status).toBe(400);
 		expect(e.message).toMatch(/668300 single levels, over the limit of 50000/);
 	});
 
 	it('changing an entry to a configuration over the budget is refused too', () => {
 		const entry = createEntry(owner, projectId, { title: 'ok', species: '', notation: '3d3' });
-		const e = failure(() => updateEntry(owner, projectId, entry.id, { version: entry.version, notation: '10m19' }));
+		const e = refusal(() => updateEntry(owner, projectId, entry.id, { version: entry.version, notation: '10m19' }));
 		expect(e.status).toBe(400);
 	});
 
@@ -59,9 +49,9 @@ describe('Shelf entries and the engine budgets', () => {
 		const entry = createEntry(owner, projectId, { title: 'old', species: '', notation: '3d3' });
 		// Written as an entry saved before the budget existed would be.
 		db.update(shelfEntries).set({ notation: '12o23' }).where(eq(shelfEntries.id, entry.id)).run();
-		const page = failure(() => annotatedLevels(owner, projectId, entry.id));
+		const page = refusal(() => annotatedLevels(owner, projectId, entry.id));
 		expect(page.status).toBe(422);
 		expect(page.message).toMatch(/12o23 of this entry is too large to show: .*over the limit of 15000/);
-		expect(failure(() => exportAnnotatedLevels(owner, projectId, entry.id, 'csv')).status).toBe(422);
+		expect(refusal(() => exportAnnotatedLevels(owner, projectId, entry.id, 'csv')).status).toBe(422);
 	});
 });

@@ -17,7 +17,7 @@ import { deleteList, getLevelList, getLineList, levelListFromShelf, listLists, u
 import { judgeCandidate, listIdentifications } from './services/identifications';
 import { matchSavedLists } from './services/saved-match';
 import { exportIdentifiedLines, exportUnobservedLines } from './services/list-exports';
-import { statusOf } from './status-of';
+import { statusOf, refusal } from './status-of';
 import { ServiceError } from './errors';
 import { DEMO_LEVEL_UPLOAD, DEMO_LINE_UPLOAD } from '../lines/demo';
 import { MAX_UPLOAD_ROWS, parseLevelUpload, parseLineUpload } from '../lines/uploads';
@@ -37,17 +37,6 @@ const rowsSaved = () => ({
 	lines: db.select({ n: count() }).from(lineListRows).get()!.n,
 	log: db.select({ n: count() }).from(activityLog).where(eq(activityLog.projectId, projectId)).get()!.n
 });
-
-/** The thrown ServiceError of a call (fails the test when nothing is thrown). */
-function refusal(call: () => unknown): ServiceError {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return e;
-		throw e;
-	}
-	throw new Error('expected a refusal');
-}
 
 const problemsOf = (e: ServiceError) => e.details.problems as { row: number; column: string; message: string }[];
 

@@ -9,7 +9,6 @@
 import { afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Actor } from './access';
 import { sqlite } from './db';
-import { ServiceError } from './errors';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
 import { createEntry, deleteEntry, updateEntry } from './services/shelf';
@@ -17,7 +16,7 @@ import { annotatedLevels, deleteAnnotation, deleteAnnotationById, reattachAnnota
 import { noteHistory } from './services/note-history';
 import { awaitingReview } from './services/review';
 import { listActivity } from './services/activity';
-import { statusOf } from './status-of';
+import { statusOf, refusal } from './status-of';
 
 let owner: Actor, ed: Actor, rita: Actor, viewer: Actor, outsider: Actor, projectId: string, otherProjectId: string, entryId: string;
 
@@ -48,15 +47,6 @@ const footprint = () => ({
 	history: count('level_annotation_history'),
 	activity: count('activity_log')
 });
-const thrown = (call: () => unknown) => {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return e;
-		throw e;
-	}
-	throw new Error('the call did not fail');
-};
 /** The newest log rows about this entry, newest first. */
 const entryLog = (n: number) =>
 	listActivity(viewer, projectId, { limit: 200 })
@@ -69,7 +59,9 @@ const propose = (who: Actor, key = '3P#1|1', energy = '113.2') =>
 describe('the rule, enforced on save', () => {
 	it('no note is created confirmed, not even by the owner (400), and nothing is written', () => {
 		const before = footprint();
-		const e = thrown(() => saveAnnotation(owner, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: '113.2', status: 'confirmed' }));
+		const e = refusal(() =>
+			saveAnnotation(owner, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: '113.2', status: 'confirmed' })
+		);
 		expect(e.status).toBe(400);
 		expect(e.message).toMatch(/A new note cannot be saved as confirmed/);
 		expect(e.details).toMatchObject({ field: 'status' });
@@ -79,7 +71,7 @@ describe('the rule, enforced on save', () => {
 	it('the proposer cannot confirm their own proposal (403); another editor can; so can the owner', () => {
 		const a = propose(ed);
 		expect(a).toMatchObject({ status: 'proposed', proposedBy: 'Ed Itor', proposedById: ed.id });
-		const e = thrown(() =>
+		const e = refusal(() =>
 			saveAnnotation(ed, projectId, entryId, {
 				levelKey: '3P#1|1',
 				observedEnergy: '113.2',

@@ -7,7 +7,6 @@
  */
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Actor } from './access';
-import { ServiceError } from './errors';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
 import { createEntry } from './services/shelf';
@@ -16,7 +15,7 @@ import { listActivity } from './services/activity';
 import { noteHistory } from './services/note-history';
 import { pasteNotes, previewPaste } from './services/paste-notes';
 import { sqlite } from './db';
-import { statusOf } from './status-of';
+import { statusOf, refusal } from './status-of';
 
 let editor: Actor, reviewer: Actor, viewer: Actor, outsider: Actor, projectId: string, entryId: string;
 
@@ -41,15 +40,6 @@ const historyOf = (key: string) => noteHistory(viewer, projectId, entryId, notes
 /** History rows of this entry's notes, deleted ones included. */
 const historyCount = () =>
 	(sqlite.prepare('select count(*) as n from level_annotation_history where entry_id = ?').get(entryId) as { n: number }).n;
-const errorOf = (call: () => unknown) => {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return e;
-		throw e;
-	}
-	throw new Error('no error');
-};
 
 const BRIEF = '0  3P0\n16.4 3P1 ±0.2\n43.5  J=2 3P2';
 const seenNone = { '3P#1|0': 0, '3P#1|1': 0, '3P#1|2': 0 };
@@ -73,7 +63,7 @@ describe('pasting energies', () => {
 	});
 
 	it('one refused line saves nothing, and the message says so and names the line', () => {
-		const e = errorOf(() => pasteNotes(editor, projectId, entryId, { text: `${BRIEF}\n17,300 1D2`, seen: seenNone }));
+		const e = refusal(() => pasteNotes(editor, projectId, entryId, { text: `${BRIEF}\n17,300 1D2`, seen: seenNone }));
 		expect(e.status).toBe(400);
 		expect(e.message).toMatch(/^Nothing was saved: 1 of 4 lines cannot be placed \(line 4: Observed energy "17,300" has a comma/);
 		expect(e.details.lines).toHaveLength(1);
@@ -113,7 +103,7 @@ describe('pasting energies', () => {
 		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: '16' });
 		// The preview saw version 1; someone saves again (version 2) before the paste is saved.
 		saveAnnotation(editor, projectId, entryId, { levelKey: '3P#1|1', observedEnergy: '16.2', version: 1 });
-		const e = errorOf(() => pasteNotes(editor, projectId, entryId, { text: BRIEF, seen: { ...seenNone, '3P#1|1': 1 } }));
+		const e = refusal(() => pasteNotes(editor, projectId, entryId, { text: BRIEF, seen: { ...seenNone, '3P#1|1': 1 } }));
 		expect(e.status).toBe(409);
 		expect(e.message).toMatch(/Nothing was saved: the note on 3P J=1 was changed by someone else since the preview/);
 		const n = notes();

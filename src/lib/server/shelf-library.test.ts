@@ -11,13 +11,12 @@ import { eq } from 'drizzle-orm';
 import type { Actor } from './access';
 import { db } from './db';
 import { shelfEntries } from './db/schema';
-import { ServiceError } from './errors';
 import { newId } from './ids';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
 import { createEntry, listEntries, updateEntry } from './services/shelf';
 import { fillLibraryColumns, libraryColumns, readOpenSubshells } from './services/shelf-library';
-import { statusOf } from './status-of';
+import { statusOf, refusal } from './status-of';
 
 let editor: Actor, viewer: Actor, stranger: Actor, projectId: string;
 
@@ -40,15 +39,7 @@ const ENTRIES = [
 ];
 
 const titles = (query: Record<string, string>) => listEntries(viewer, projectId, query).entries.map((e) => e.title);
-const failure = (query: Record<string, string>) => {
-	try {
-		listEntries(viewer, projectId, query);
-	} catch (e) {
-		if (e instanceof ServiceError) return { status: e.status, message: e.message };
-		throw e;
-	}
-	throw new Error('expected a refusal');
-};
+const failure = (query: Record<string, string>) => refusal(() => listEntries(viewer, projectId, query));
 
 beforeAll(async () => {
 	editor = await signUp({ name: 'Lib Editor', email: 'lib-editor@example.org', password: 'long-enough-pw' });

@@ -8,12 +8,12 @@
  * Level keys are the 2p² levels ³P₀,₁,₂ (Condon & Shortley 1935 ch. VII: 2p² gives ³P ¹D ¹S).
  */
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { refusal } from './status-of';
 import { and, asc, eq, sql } from 'drizzle-orm';
 import { isActionFailure } from '@sveltejs/kit';
 import type { Actor } from './access';
 import { db, sqlite } from './db';
 import { activityLog, levelAnnotationHistory, levelAnnotations } from './db/schema';
-import { ServiceError } from './errors';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
 import { createEntry, deleteEntry, getEntry, updateEntry } from './services/shelf';
@@ -85,16 +85,6 @@ function snapshot() {
 		perProject,
 		versions: sqlite.prepare(`select id, project_id, version from shelf_entries order by id`).all()
 	};
-}
-
-function refusal(call: () => unknown): { status: number; message: string } {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return { status: e.status, message: e.message };
-		throw e;
-	}
-	throw new Error('expected a refusal');
 }
 
 afterEach(() => {

@@ -5,7 +5,7 @@
  * from memory). Product rules otherwise: common practice, no source.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ServiceError } from './errors';
+import { refusal } from './status-of';
 import type { Actor } from './access';
 import { signUp } from './services/users';
 import { addMember, createProject } from './services/projects';
@@ -22,22 +22,12 @@ beforeAll(async () => {
 	addMember(editor, projectId, { email: 'vi-values@example.org', role: 'viewer' });
 });
 
-const failure = (call: () => unknown) => {
-	try {
-		call();
-	} catch (e) {
-		if (e instanceof ServiceError) return e;
-		throw e;
-	}
-	throw new Error('expected a refusal');
-};
-
 const entry = (notation: string, species = '', title = 'T') => createEntry(editor, projectId, { title, species, notation });
 
 describe('energies as typed', () => {
 	it('17,300 is refused as ambiguous instead of becoming 17.3', () => {
 		const e = entry('1s2 2s2 2p2', 'O III');
-		const err = failure(() => saveAnnotation(editor, projectId, e.id, { levelKey: '3P#1|1', observedEnergy: '17,300' }));
+		const err = refusal(() => saveAnnotation(editor, projectId, e.id, { levelKey: '3P#1|1', observedEnergy: '17,300' }));
 		expect(err.status).toBe(400);
 		expect(err.message).toMatch(/comma, which is ambiguous/);
 		expect(listAnnotations(viewer, projectId, e.id)).toHaveLength(0);
@@ -62,7 +52,7 @@ describe('energies as typed', () => {
 
 	it('an uncertainty without an energy is refused with a message', () => {
 		const e = entry('1s2 2s2 2p2', 'O III');
-		const err = failure(() => saveAnnotation(editor, projectId, e.id, { levelKey: '3P#1|1', uncertainty: 0.5 }));
+		const err = refusal(() => saveAnnotation(editor, projectId, e.id, { levelKey: '3P#1|1', uncertainty: 0.5 }));
 		expect(err.message).toMatch(/uncertainty needs an observed energy/);
 		expect(err.details.field).toBe('uncertainty');
 	});
@@ -132,11 +122,11 @@ describe('a configuration change keeps every note, detached', () => {
 		expect(page.detached.map((n) => n.comment)).toEqual(['for 2p2']);
 		// The new ³P₁ can get its own note while the detached one waits.
 		saveAnnotation(editor, projectId, e.id, { levelKey: '3P#1|1', observedEnergy: '158.265' });
-		expect(failure(() => reattachAnnotation(editor, projectId, e.id, note.id, { levelKey: '3P#1|1', version: 1 })).status).toBe(409);
+		expect(refusal(() => reattachAnnotation(editor, projectId, e.id, note.id, { levelKey: '3P#1|1', version: 1 })).status).toBe(409);
 		const moved = reattachAnnotation(editor, projectId, e.id, note.id, { levelKey: '3P#1|0', version: 1 });
 		expect(moved).toMatchObject({ levelKey: '3P#1|0', detached: false, version: 2, observedEnergyText: '113.178' });
-		expect(failure(() => reattachAnnotation(viewer, projectId, e.id, note.id, { levelKey: '3P#1|2', version: 2 })).status).toBe(403);
-		expect(failure(() => reattachAnnotation(editor, projectId, e.id, note.id, { levelKey: '2D#1|3/2', version: 2 })).status).toBe(400);
+		expect(refusal(() => reattachAnnotation(viewer, projectId, e.id, note.id, { levelKey: '3P#1|2', version: 2 })).status).toBe(403);
+		expect(refusal(() => reattachAnnotation(editor, projectId, e.id, note.id, { levelKey: '2D#1|3/2', version: 2 })).status).toBe(400);
 	});
 
 	it('the same configuration written differently keeps the notes attached: 2p2 → [He] 2s2 2p2', () => {
@@ -151,7 +141,7 @@ describe('a configuration change keeps every note, detached', () => {
 		const e = entry('2p2', 'O III');
 		const note = saveAnnotation(editor, projectId, e.id, { levelKey: '1S#1|0', observedEnergy: '43185.74' });
 		updateEntry(editor, projectId, e.id, { notation: '2p3', species: 'O II', version: e.version });
-		expect(failure(() => deleteAnnotationById(viewer, projectId, e.id, note.id)).status).toBe(403);
+		expect(refusal(() => deleteAnnotationById(viewer, projectId, e.id, note.id)).status).toBe(403);
 		deleteAnnotationById(editor, projectId, e.id, note.id);
 		expect(listAnnotations(viewer, projectId, e.id)).toHaveLength(0);
 	});
@@ -185,7 +175,7 @@ describe('paging the Shelf', () => {
 		expect(new Set(seen).size).toBe(7);
 		expect(listEntries(editor, p, { q: 'odd' }).entries).toHaveLength(3);
 		expect(listEntries(editor, p, { q: '100%' }).entries).toHaveLength(0);
-		expect(failure(() => listEntries(editor, p, { limit: '500' })).message).toMatch(/from 1 to 200/);
-		expect(failure(() => listEntries(editor, p, { cursor: 'nonsense' })).message).toMatch(/cursor/);
+		expect(refusal(() => listEntries(editor, p, { limit: '500' })).message).toMatch(/from 1 to 200/);
+		expect(refusal(() => listEntries(editor, p, { cursor: 'nonsense' })).message).toMatch(/cursor/);
 	});
 });

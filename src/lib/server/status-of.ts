@@ -10,3 +10,14 @@ export function statusOf(call: () => unknown): number | 'ok' {
 		throw e;
 	}
 }
+
+/** For service tests: the ServiceError a call throws; the test fails when the call succeeds. */
+export function refusal(call: () => unknown): ServiceError {
+	try {
+		call();
+	} catch (e) {
+		if (e instanceof ServiceError) return e;
+		throw e;
+	}
+	throw new Error('expected a refusal, but the call succeeded');
+}
