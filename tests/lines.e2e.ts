@@ -134,6 +134,7 @@ test.describe('Transition finder screen', () => {
 	});
 
 	test('a signed-in person is offered the configurations on their Shelves; a visitor is told to sign in', async ({ browser, page }) => {
+		// Product rule, no source: only the Shelves of one's own projects are offered (shelf-picks.ts).
 		await page.goto('/transitions');
 		await expect(page.getByTestId('shelf-hint')).toContainText('Sign in to pick configurations');
 		const { page: member } = await newUser(browser, 'Fina Finder', 'finder');
