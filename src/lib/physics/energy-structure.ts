@@ -3,20 +3,18 @@
  * built once and reused by the level solver, the LS→jj sweep and the fit.
  *
  * Method. Every level of J has exactly one state with M_J = 0 (or ½), so that one determinant
- * block holds one state of every level (Condon & Shortley 1935, §3⁴). In this block an LS-coupled
- * basis |γ S L J⟩ is built (below), which splits the block into J subspaces with orthonormal bases
- * V_J. Because H commutes with J², each parameter's matrix is projected once,
- * H_p^J = V_Jᵀ H_p V_J, and every later evaluation only sums and diagonalises the small J blocks.
- * The projection computes only the entries that can be non-zero: the Coulomb integrals F^k, G^k
- * commute with L² and S², so they join only basis states of the same S and L; the spin–orbit
- * operator is of rank 1 in spin and in orbit, so it joins only |ΔS| ≤ 1 and |ΔL| ≤ 1 (Condon &
- * Shortley 1935, §§9¹, 10¹; Cowan 1981, §11-4). Each basis vector's dot products run over its
- * non-zero entries only.
- * LS classes are the joint eigenspaces of L², S² (and Racah's pairing operator for one open
- * subshell, which gives the seniority); L², S² and the pairing conserve M_L and M_S, so they are
- * diagonalised per (M_L, M_S) piece of the block, and J² is then diagonalised inside each class.
- * The LS composition of a level is then the sum of its squared coefficients per class. jj classes are the eigenspaces of the
- * one-electron l·s of each subshell (which count the electrons with j = l − ½ and j = l + ½).
+ * block holds one state of every level (Condon & Shortley 1935, §3⁴). The block is split into
+ * pieces of one M_L (M_S = M_J − M_L). L², S² (and Racah's pairing operator for one open
+ * subshell, which gives the seniority) conserve M_L and M_S, so their joint eigenspaces — the LS
+ * classes — are found per piece: S² only flips spins, so it is diagonalised on each group of
+ * determinants that occupy the same spatial orbitals, then L² (with the pairing operator) inside
+ * each S of the piece. From the classes, ls-terms.ts builds the terms |γ S L⟩ with consistent
+ * phases on every piece, their J states by Clebsch–Gordan sums, and every parameter's matrix in
+ * each J space (Coulomb integrals from one piece, spin–orbit from one reduced element per pair
+ * of terms). Each later evaluation only sums and diagonalises the small J blocks.
+ * The LS composition of a level is the sum of its squared coefficients per class. jj classes are
+ * the eigenspaces of the one-electron l·s of each subshell (which count the electrons with
+ * j = l − ½ and j = l + ½).
  */
 import type { Configuration, Subshell } from './types';
 import {
@@ -32,6 +30,7 @@ import { parameterMatrices, type ParameterMatrices } from './hamiltonian';
 import { denseSubmatrix, jSquared, lSquared, pairing, seniorityFromPairing, sSquared, type SparseSymmetric } from './momentum-operators';
 import { radialParameters, shellName, type RadialParameter } from './slater-parameters';
 import { symmetricEigen } from './symmetric-eigen';
+import { blockTerms, termJSpaces, type RowsOfH, type SparseVector } from './ls-terms';
 import { asSubshells, formatConfiguration } from './parse';
 import { halfString } from './half';
 
@@ -55,8 +54,6 @@ export interface JjClass {
 export interface JSpace {
 	twoJ: number;
 	dim: number;
-	/** Basis vectors as rows (dim × n). */
-	basis: Float64Array;
 	/** Projected parameter matrices, dim × dim each, with the configuration average already subtracted. */
 	param: Float64Array[];
 	/** The basis is LS-coupled: the LS class (index into `lsClasses`) of each basis vector. */
@@ -81,7 +78,31 @@ export interface EnergyStructure {
 }
 
 const cache = new Map<string, EnergyStructure>();
+/** At most this many structures, and at most CACHE_BYTES of their matrices, stay cached (the newest is always kept). */
 const CACHE_SIZE = 6;
+/** 4f⁷ 5d's J-space matrices take about 90 MB; a compute worker's heap is capped at 512 MB (product rule, no source). */
+export const CACHE_BYTES = 160e6;
+
+/** Bytes of a structure's J-space matrices and jj vectors (what dominates its size). */
+export function structureBytes(s: EnergyStructure): number {
+	let bytes = 0;
+	for (const sp of s.spaces) {
+		for (const p of sp.param) bytes += p.byteLength;
+		for (const j of sp.jj) for (const v of j.vectors) bytes += v.byteLength;
+	}
+	return bytes;
+}
+
+function remember(key: string, s: EnergyStructure): void {
+	cache.set(key, s);
+	let total = 0;
+	for (const x of cache.values()) total += structureBytes(x);
+	while (cache.size > 1 && (cache.size > CACHE_SIZE || total > CACHE_BYTES)) {
+		const oldest = cache.keys().next().value!;
+		total -= structureBytes(cache.get(oldest)!);
+		cache.delete(oldest);
+	}
+}
 
 /** Empties the structure cache (benchmarks measure cold runs with it). */
 export function clearEnergyCache(): void {
@@ -89,13 +110,6 @@ export function clearEnergyCache(): void {
 }
 
 /** Every parameter matrix's entries by source row (both triangles): row i feeds column `col[k]`. */
-interface RowsOfH {
-	start: Int32Array;
-	col: Int32Array;
-	coef: Float64Array;
-	param: Int32Array;
-}
-
 function rowsOfH(m: ParameterMatrices): RowsOfH {
 	const { rows, cols, coef, param } = m;
 	const count = new Int32Array(m.n + 1);
@@ -122,55 +136,6 @@ function rowsOfH(m: ParameterMatrices): RowsOfH {
 		if (rows[e] !== cols[e]) put(cols[e], rows[e], e);
 	}
 	return out;
-}
-
-/**
- * V H_p Vᵀ for every parameter p, with V the dim × n basis (rows) and H_p the sparse upper-triangle
- * entries; only the entries that `joins(p, a, b)` allows are computed (the others are zero by the
- * selection rules above). `support[a]` lists the non-zero positions of basis row a.
- */
-function projectParameters(
-	m: ParameterMatrices,
-	H: RowsOfH,
-	basis: Float64Array,
-	dim: number,
-	n: number,
-	support: Int32Array[],
-	joins: (p: number, a: number, b: number) => boolean
-): Float64Array[] {
-	const np = m.params.length;
-	// T_p row b = H_p v_b (dense n), reading only the rows of H at the non-zero entries of v_b.
-	const T = m.params.map(() => new Float64Array(dim * n));
-	for (let b = 0; b < dim; b++) {
-		const o = b * n;
-		const sb = support[b];
-		for (let s = 0; s < sb.length; s++) {
-			const i = sb[s];
-			const v = basis[o + i];
-			for (let k = H.start[i]; k < H.start[i + 1]; k++) T[H.param[k]][o + H.col[k]] += H.coef[k] * v;
-		}
-	}
-	const P = m.params.map(() => new Float64Array(dim * dim));
-	for (let p = 0; p < np; p++) {
-		const t = T[p];
-		const out = P[p];
-		for (let a = 0; a < dim; a++) {
-			const sa = support[a];
-			const va = a * n;
-			for (let b = a; b < dim; b++) {
-				if (!joins(p, a, b)) continue;
-				const tb = b * n;
-				let sum = 0;
-				for (let k = 0; k < sa.length; k++) {
-					const i = sa[k];
-					sum += basis[va + i] * t[tb + i];
-				}
-				out[a * dim + b] = sum;
-				out[b * dim + a] = sum;
-			}
-		}
-	}
-	return P;
 }
 
 /** A vector on a few positions of a piece: `pos` are piece-local positions, `val` the values there. */
@@ -308,7 +273,12 @@ export function energyStructure(
 	const config = formatConfiguration(all);
 	const key = `${config}|${limits.maxBlock ?? ''}|${limits.maxTotal ?? ''}`;
 	const hit = cache.get(key);
-	if (hit) return hit;
+	if (hit) {
+		// The newest use goes last, so the least recently used is dropped first.
+		cache.delete(key);
+		cache.set(key, hit);
+		return hit;
+	}
 	if (set.shells.length === 0) throw new RangeError(`${config} has no open subshell: it has a single level ¹S₀ and nothing to solve`);
 	const { total } = checkDeterminantBudget(set.shells, limits);
 	const params = radialParameters(set);
@@ -327,8 +297,8 @@ export function energyStructure(
 	const single = set.shells.length === 1 && set.shells[0].occupancy >= 2 ? pairing(set, block, 0) : null;
 	const lsClasses: LsClass[] = [];
 	const lsIndex = new Map<string, number>();
-	/** Per class: its vectors, each supported on one piece (indices into the block and values). */
-	const classVectors: { idx: number[]; val: Float64Array }[][] = [];
+	/** Orthonormal class vectors by class and piece ("cls,M_L"), each on its piece only. */
+	const classVectors = new Map<string, SparseVector[]>();
 	const pieces = new Map<number, number[]>();
 	for (let i = 0; i < n; i++) {
 		const list = pieces.get(block.ML[i]);
@@ -368,60 +338,28 @@ export function energyStructure(
 					cls = lsClasses.length;
 					lsClasses.push({ twoS, L, seniority });
 					lsIndex.set(ck, cls);
-					classVectors.push([]);
 				}
-				classVectors[cls].push({ idx, val });
+				const nz: number[] = [];
+				for (let t = 0; t < m; t++) if (val[t] !== 0) nz.push(t);
+				const key = `${cls},${block.ML[idx[0]]}`;
+				const list = classVectors.get(key) ?? [];
+				list.push({ pos: Int32Array.from(nz, (t) => idx[t]), val: Float64Array.from(nz, (t) => val[t]) });
+				classVectors.set(key, list);
 			}
 		}
 		idx.forEach((i) => (local[i] = -1));
 	}
 
-	// LS-coupled basis: J² commutes with L², S² and the pairing operator, so it is diagonalised
-	// inside each class; its eigenvectors are states |γ S L J, M_J⟩ (Condon & Shortley 1935, §8³).
-	const groups = new Map<number, { cls: number; vec: Float64Array }[]>();
-	lsClasses.forEach((_, cls) => {
-		const vs = classVectors[cls];
-		const d = vs.length;
-		// The d × d class matrix ⟨u_b|J²|u_a⟩ from the sparse J²; J² = J₋J₊ + J_z² + J_z moves M_L by at
-		// most 1, so vectors on pieces further apart are not joined.
-		const ML = vs.map((v) => block.ML[v.idx[0]]);
-		const C = new Float64Array(d * d);
-		const Ju = new Float64Array(n);
-		for (let a = 0; a < d; a++) {
-			const { idx, val } = vs[a];
-			for (let t = 0; t < idx.length; t++) {
-				const i = idx[t];
-				const v = val[t];
-				if (v === 0) continue;
-				for (let k = J2.start[i]; k < J2.start[i + 1]; k++) Ju[J2.col[k]] += v * J2.val[k];
-			}
-			for (let b = a; b < d; b++) {
-				if (Math.abs(ML[b] - ML[a]) > 1) continue;
-				const u = vs[b];
-				let sum = 0;
-				for (let t = 0; t < u.idx.length; t++) sum += u.val[t] * Ju[u.idx[t]];
-				C[a * d + b] = sum;
-				C[b * d + a] = sum;
-			}
-			for (let t = 0; t < idx.length; t++) {
-				const i = idx[t];
-				for (let k = J2.start[i]; k < J2.start[i + 1]; k++) Ju[J2.col[k]] = 0;
-			}
-		}
-		const eig = symmetricEigen(C, d);
-		for (let r = 0; r < d; r++) {
-			const twoJ = nearestTwoK(eig.values[r], 'J²');
-			const vec = new Float64Array(n);
-			for (let a = 0; a < d; a++) {
-				const c = eig.vectors[r * d + a];
-				if (c === 0) continue;
-				vs[a].idx.forEach((i, k) => (vec[i] += c * vs[a].val[k]));
-			}
-			const list = groups.get(twoJ);
-			if (list) list.push({ cls, vec });
-			else groups.set(twoJ, [{ cls, vec }]);
-		}
-	});
+	// The LS-coupled basis |γ S L J, M_J⟩ term by term, and the parameter matrices in its J spaces (ls-terms.ts).
+	const terms = blockTerms(block, J2, lsClasses, (cls, ML) => classVectors.get(`${cls},${ML}`) ?? []);
+	const termSpaces = termJSpaces(
+		block,
+		rowsOfH(matrices),
+		terms,
+		params.map((p) => p.kind === 'zeta')
+	);
+	const states = termSpaces.reduce((sum, sp) => sum + sp.terms.length, 0);
+	if (states !== n) throw new Error(`internal error: the J spaces hold ${states} states, the block ${n}`);
 
 	// jj classes via the one-electron l·s of each subshell (the ζ parameter matrices).
 	const zetaParams = params.map((p, i) => (p.kind === 'zeta' ? i : -1)).filter((i) => i >= 0);
@@ -430,27 +368,10 @@ export function energyStructure(
 	const jjCandidates = lowerCandidates(set, params);
 
 	const spaces: JSpace[] = [];
-	const hRows = rowsOfH(matrices);
-	const sortedJ = [...groups.keys()].sort((a, b) => a - b);
-	for (const twoJ of sortedJ) {
-		const members = groups.get(twoJ)!;
+	for (const { twoJ, terms: members, param } of termSpaces) {
 		const dim = members.length;
-		const basis = new Float64Array(dim * n);
-		members.forEach((m, r) => basis.set(m.vec, r * n));
-		const lsOf = Int32Array.from(members.map((m) => m.cls));
-		const support = members.map((m) => {
-			const nz: number[] = [];
-			for (let i = 0; i < n; i++) if (m.vec[i] !== 0) nz.push(i);
-			return Int32Array.from(nz);
-		});
-		const twoS = members.map((m) => lsClasses[m.cls].twoS);
-		const L = members.map((m) => lsClasses[m.cls].L);
-		const joins = (p: number, a: number, b: number) =>
-			params[p].kind === 'zeta' ? Math.abs(twoS[a] - twoS[b]) <= 2 && Math.abs(L[a] - L[b]) <= 1 : twoS[a] === twoS[b] && L[a] === L[b];
-		const param = projectParameters(matrices, hRows, basis, dim, n, support, joins).map((P, p) => {
-			for (let a = 0; a < dim; a++) P[a * dim + a] -= matrices.average[p];
-			return P;
-		});
+		const lsOf = Int32Array.from(members, (t) => terms[t].cls);
+		for (let p = 0; p < params.length; p++) for (let a = 0; a < dim; a++) param[p][a * dim + a] -= matrices.average[p];
 		// jj classes from the eigenvectors of Σ_s c_s (l·s)_s in this J space.
 		const jj: { cls: number; vectors: Float64Array[] }[] = [];
 		if (zetaParams.length > 0) {
@@ -488,7 +409,7 @@ export function energyStructure(
 			}
 			for (const [cls, vectors] of acc) jj.push({ cls, vectors });
 		}
-		spaces.push({ twoJ, dim, basis, param, lsOf, jj });
+		spaces.push({ twoJ, dim, param, lsOf, jj });
 	}
 	const parity = all.reduce((a, s) => a + s.l * s.occupancy, 0) % 2 === 0 ? 'even' : 'odd';
 	const structure: EnergyStructure = {
@@ -503,8 +424,7 @@ export function energyStructure(
 		spaces,
 		matrices
 	};
-	if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value!);
-	cache.set(key, structure);
+	remember(key, structure);
 	return structure;
 }
 
