@@ -23,7 +23,7 @@ import { createParameterSet, deleteParameterSet, getParameterSet, listParameterS
 import { fitAndSave, getFitReport, listFitReports, prepareEntryFit } from './services/fit-reports';
 import { exportFitReport } from './services/exports';
 import { fitParameters } from '../physics/fit';
-import { statusOf } from './status-of';
+import { refusal, statusOf } from './status-of';
 
 let editor: Actor, reviewer: Actor, viewer: Actor, stranger: Actor, projectId: string, entryId: string;
 
@@ -125,6 +125,74 @@ describe('parameter sets', () => {
 		try {
 			expect(() => createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START })).toThrow(/log refused/);
 			expect(listParameterSets(viewer, projectId, entryId)).toHaveLength(0);
+		} finally {
+			sqlite.exec('drop trigger refuse_params');
+		}
+	});
+});
+
+describe('renaming, re-commenting and deleting a set (product rules, common practice, no source)', () => {
+	it('a rename logs both names; a comment-only change says so; each bumps the version by one', () => {
+		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START });
+		const renamed = updateParameterSet(editor, projectId, entryId, set.id, { name: 'start, ζ = 0', comment: 'from Racah B, C', version: 1 });
+		expect(renamed).toMatchObject({ name: 'start, ζ = 0', comment: 'from Racah B, C', version: 2, parameters: START });
+		expect(log()[0]).toMatchObject({ kind: 'parameters.saved', subject: `entry:${entryId}` });
+		expect(log()[0].summary).toBe('renamed the parameters “start” to “start, ζ = 0” and changed their comment of “Invented 3d2 ion”');
+		updateParameterSet(reviewer, projectId, entryId, set.id, { comment: 'checked', version: 2 });
+		expect(log()[0].summary).toBe('changed the comment of the parameters “start, ζ = 0” of “Invented 3d2 ion”');
+		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ comment: 'checked', version: 3, updatedBy: 'Rita Reviewer' });
+	});
+
+	it('a stale rename is refused with who changed the set and its present name and comment; nothing is overwritten', () => {
+		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START, comment: 'first' });
+		updateParameterSet(reviewer, projectId, entryId, set.id, { name: 'Rita’s start', comment: 'hers', version: 1 });
+		const lines = log().length;
+		const e = refusal(() => updateParameterSet(editor, projectId, entryId, set.id, { name: 'mine', comment: 'mine', version: 1 }));
+		expect(e.status).toBe(409);
+		expect(e.message).toMatch(/changed by someone else \(Rita Reviewer\).*you had version 1, it is now version 2, named “Rita’s start”.*Nothing was changed/);
+		expect(e.details).toMatchObject({ currentVersion: 2, current: { name: 'Rita’s start', comment: 'hers', version: 2, updatedBy: 'Rita Reviewer' } });
+		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ name: 'Rita’s start', comment: 'hers', version: 2 });
+		expect(log()).toHaveLength(lines);
+		// A stale delete is refused the same way, and the set stays.
+		expect(refusal(() => deleteParameterSet(editor, projectId, entryId, set.id, 1)).details).toMatchObject({ current: { name: 'Rita’s start' } });
+		expect(listParameterSets(viewer, projectId, entryId)).toHaveLength(1);
+	});
+
+	it('says what a name or comment may be: not empty, at most 120 and 2000 characters (400, nothing written)', () => {
+		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START });
+		const empty = refusal(() => updateParameterSet(editor, projectId, entryId, set.id, { name: '   ', version: 1 }));
+		expect([empty.status, empty.message]).toEqual([400, 'name must not be empty: give the set a name such as "fit of 12 levels"']);
+		expect(empty.details).toMatchObject({ field: 'name' });
+		expect(refusal(() => updateParameterSet(editor, projectId, entryId, set.id, { name: 'x'.repeat(121), version: 1 })).message).toBe(
+			'name must be at most 120 characters'
+		);
+		const long = refusal(() => updateParameterSet(editor, projectId, entryId, set.id, { comment: 'x'.repeat(2001), version: 1 }));
+		expect([long.message, long.details.field]).toEqual(['comment must be at most 2000 characters', 'comment']);
+		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ name: 'start', version: 1 });
+	});
+
+	it('deleting a set keeps the fit reports made from it, with the starting values they used, unlinked', () => {
+		annotateAll();
+		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START });
+		const report = fitAndSave(editor, projectId, entryId, { parameters: START, vary: VARY, parameterSetId: set.id });
+		expect(report.parameterSetId).toBe(set.id);
+		deleteParameterSet(editor, projectId, entryId, set.id, 1);
+		expect(log()[0]).toMatchObject({ kind: 'parameters.deleted', summary: 'deleted the parameters “start” of “Invented 3d2 ion”' });
+		expect(statusOf(() => getParameterSet(viewer, projectId, entryId, set.id))).toBe(404);
+		const kept = getFitReport(viewer, projectId, entryId, report.id).report;
+		expect(kept.parameterSetId).toBeNull();
+		expect(kept.request.parameters).toEqual(START);
+		expect(kept.result).toEqual(report.result);
+	});
+
+	it('when the activity line cannot be written, neither the rename nor the deletion happens (one transaction)', () => {
+		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START });
+		sqlite.exec(`create trigger refuse_params before insert on activity_log when new.kind like 'parameters.%'
+			begin select raise(abort, 'log refused'); end`);
+		try {
+			expect(() => updateParameterSet(editor, projectId, entryId, set.id, { name: 'renamed', version: 1 })).toThrow(/log refused/);
+			expect(() => deleteParameterSet(editor, projectId, entryId, set.id, 1)).toThrow(/log refused/);
+			expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ name: 'start', version: 1 });
 		} finally {
 			sqlite.exec('drop trigger refuse_params');
 		}

@@ -105,6 +105,8 @@ const PAGE_ACCESS: Record<string, PageAccess> = {
 	// Copying out only reads the source: its viewers may copy to a project they edit (shelf-transfer.ts).
 	'ACTION /projects/:projectId/shelf/:entryId ?/copy': 'viewer',
 	'ACTION /projects/:projectId/shelf/:entryId ?/move': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/editSet': 'editor',
+	'ACTION /projects/:projectId/shelf/:entryId ?/deleteSet': 'editor',
 	'PAGE /projects/:projectId/lists': 'viewer',
 	'ACTION /projects/:projectId/lists ?/preview': 'editor',
 	'ACTION /projects/:projectId/lists ?/save': 'editor',
@@ -429,6 +431,10 @@ const SAMPLES: Record<string, Sample> = {
 	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/deleteNote': { form: (c) => ({ annotationId: c.annotationId }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/tags': { form: () => ({ tags: 'matrix, tagged', version: '1' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/editSet': {
+		form: (c) => ({ setId: parameterSetIn(c), name: 'renamed by the matrix', comment: '', version: '1' })
+	},
+	'ACTION /projects/:projectId/shelf/:entryId ?/deleteSet': { form: (c) => ({ setId: parameterSetIn(c), name: 'matrix set', version: '1' }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/copy': { form: () => ({ projectId: targetProject() }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/move': { form: () => ({ projectId: targetProject() }) },
 	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': { json: () => ({ projectId: targetProject() }) },

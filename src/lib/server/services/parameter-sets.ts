@@ -58,11 +58,25 @@ function readSet(tx: Tx, entryId: string, setId: string) {
 	return row;
 }
 
-const stale = (had: number, now: number) =>
+/**
+ * 409 for a stale version. The set as it is now travels with the refusal (`current`), so a page can show
+ * what the other person saved beside what was typed, and nothing is overwritten unseen.
+ */
+const stale = (had: number, now: ReturnType<typeof readSet>) =>
 	conflict(
-		`This parameter set was changed by someone else since you opened it (you had version ${had}, it is now ${now}); reload and try again`,
-		{ currentVersion: now }
+		`This parameter set was changed by someone else${now.updatedBy ? ` (${now.updatedBy})` : ''} since you opened it: you had version ${had}, it is now version ${now.version}, named “${now.name}”. Nothing was changed; look at their values, then try again`,
+		{ currentVersion: now.version, current: { name: now.name, comment: now.comment, version: now.version, updatedBy: now.updatedBy } }
 	);
+
+/** The activity line of a change: what changed, in words (a rename names both names). */
+function changeSummary(before: { name: string }, data: { name?: string; parameters?: unknown; comment?: string }, entryTitle: string) {
+	const renamed = data.name !== undefined && data.name !== before.name;
+	const what = [data.parameters !== undefined ? 'values' : '', data.comment !== undefined ? 'comment' : ''].filter(Boolean).join(' and ');
+	const of = `of “${entryTitle}”`;
+	if (renamed && what) return `renamed the parameters “${before.name}” to “${data.name}” and changed their ${what} ${of}`;
+	if (renamed) return `renamed the parameters “${before.name}” to “${data.name}” ${of}`;
+	return `changed the ${what || 'record'} of the parameters “${before.name}” ${of}`;
+}
 
 /** The entry's parameter sets, most recently changed first. */
 export function listParameterSets(actor: Actor, projectId: string, entryId: string) {
@@ -111,7 +125,7 @@ export function updateParameterSet(actor: Actor, projectId: string, entryId: str
 	const entry = readEntry(projectId, entryId);
 	return db.transaction((tx) => {
 		const current = readSet(tx, entryId, setId);
-		if (current.version !== version) throw stale(version, current.version);
+		if (current.version !== version) throw stale(version, current);
 		// A set keeps the configuration it was saved for; new values are checked against it.
 		if (data.parameters) checkParametersFor(current.notation, data.parameters);
 		tx.update(parameterSets)
@@ -122,7 +136,7 @@ export function updateParameterSet(actor: Actor, projectId: string, entryId: str
 			projectId,
 			actor,
 			kind: 'parameters.saved',
-			summary: `changed the parameters “${data.name ?? current.name}” of “${entry.title}”`,
+			summary: changeSummary(current, data, entry.title),
 			subject: `entry:${entryId}`
 		});
 		return readSet(tx, entryId, setId);
@@ -137,7 +151,7 @@ export function deleteParameterSet(actor: Actor, projectId: string, entryId: str
 	const entry = readEntry(projectId, entryId);
 	db.transaction((tx) => {
 		const current = readSet(tx, entryId, setId);
-		if (current.version !== version) throw stale(version, current.version);
+		if (current.version !== version) throw stale(version, current);
 		tx.delete(parameterSets).where(eq(parameterSets.id, setId)).run();
 		logActivity(tx, {
 			projectId,

@@ -3,7 +3,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { deleteEntry, getEntry, notesDetachedBy, updateEntry } from '$lib/server/services/shelf';
 import { annotatedLevels, deleteAnnotationById, reattachAnnotation, saveAnnotation } from '$lib/server/services/annotations';
 import { pasteNotes, previewPaste } from '$lib/server/services/paste-notes';
-import { listParameterSets } from '$lib/server/services/parameter-sets';
+import { deleteParameterSet, listParameterSets, updateParameterSet } from '$lib/server/services/parameter-sets';
 import { listFitReports } from '$lib/server/services/fit-reports';
 import { forAction, forPage, requireUser } from '$lib/server/http';
 import { readForm, shelfFieldsFrom } from '$lib/server/forms';
@@ -127,6 +127,36 @@ export const actions: Actions = {
 			noteId: annotationId
 		});
 		return result.ok ? { reattached: input.levelKey } : result.failure;
+	},
+	/**
+	 * Renames a saved parameter set and/or changes its comment, with the version the editor read. A stale
+	 * version is refused (409) with the set as it is now (`current`); what was typed comes back untouched.
+	 */
+	editSet: async (event) => {
+		const user = requireUser(event);
+		const form = await readForm(event.request);
+		const setId = form.text('setId');
+		const typed = { name: form.text('name'), comment: form.text('comment') };
+		const version = Number(form.text('version'));
+		const { projectId, entryId } = event.params;
+		const result = await forAction(() => updateParameterSet(user, projectId, entryId, setId, { ...typed, version }), {
+			form: 'parameterSet',
+			setId,
+			typed
+		});
+		if (!result.ok) return result.failure;
+		return { form: 'parameterSet', setId, saved: { name: result.value.name, version: result.value.version } };
+	},
+	/** Deletes a saved parameter set (version as read); fit reports made from it stay, with the values they used. */
+	deleteSet: async (event) => {
+		const user = requireUser(event);
+		const form = await readForm(event.request);
+		const setId = form.text('setId');
+		const version = Number(form.text('version'));
+		const { projectId, entryId } = event.params;
+		const result = await forAction(() => deleteParameterSet(user, projectId, entryId, setId, version), { form: 'parameterSet', setId });
+		if (!result.ok) return result.failure;
+		return { form: 'parameterSet', setId, deleted: form.text('name') };
 	},
 	/** A copy here, titled "… (copy)", with its notes; opens the copy. */
 	duplicate: async (event) => {
