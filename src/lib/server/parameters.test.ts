@@ -134,13 +134,21 @@ describe('parameter sets', () => {
 describe('renaming, re-commenting and deleting a set (product rules, common practice, no source)', () => {
 	it('a rename logs both names; a comment-only change says so; each bumps the version by one', () => {
 		const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START });
-		const renamed = updateParameterSet(editor, projectId, entryId, set.id, { name: 'start, ζ = 0', comment: 'from Racah B, C', version: 1 });
+		const renamed = updateParameterSet(editor, projectId, entryId, set.id, {
+			name: 'start, ζ = 0',
+			comment: 'from Racah B, C',
+			version: 1
+		});
 		expect(renamed).toMatchObject({ name: 'start, ζ = 0', comment: 'from Racah B, C', version: 2, parameters: START });
 		expect(log()[0]).toMatchObject({ kind: 'parameters.saved', subject: `entry:${entryId}` });
 		expect(log()[0].summary).toBe('renamed the parameters “start” to “start, ζ = 0” and changed their comment of “Invented 3d2 ion”');
 		updateParameterSet(reviewer, projectId, entryId, set.id, { comment: 'checked', version: 2 });
 		expect(log()[0].summary).toBe('changed the comment of the parameters “start, ζ = 0” of “Invented 3d2 ion”');
-		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ comment: 'checked', version: 3, updatedBy: 'Rita Reviewer' });
+		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({
+			comment: 'checked',
+			version: 3,
+			updatedBy: 'Rita Reviewer'
+		});
 	});
 
 	it('a stale rename is refused with who changed the set and its present name and comment; nothing is overwritten', () => {
@@ -149,12 +157,19 @@ describe('renaming, re-commenting and deleting a set (product rules, common prac
 		const lines = log().length;
 		const e = refusal(() => updateParameterSet(editor, projectId, entryId, set.id, { name: 'mine', comment: 'mine', version: 1 }));
 		expect(e.status).toBe(409);
-		expect(e.message).toMatch(/changed by someone else \(Rita Reviewer\).*you had version 1, it is now version 2, named “Rita’s start”.*Nothing was changed/);
-		expect(e.details).toMatchObject({ currentVersion: 2, current: { name: 'Rita’s start', comment: 'hers', version: 2, updatedBy: 'Rita Reviewer' } });
+		expect(e.message).toMatch(
+			/changed by someone else \(Rita Reviewer\).*you had version 1, it is now version 2, named “Rita’s start”.*Nothing was changed/
+		);
+		expect(e.details).toMatchObject({
+			currentVersion: 2,
+			current: { name: 'Rita’s start', comment: 'hers', version: 2, updatedBy: 'Rita Reviewer' }
+		});
 		expect(getParameterSet(viewer, projectId, entryId, set.id)).toMatchObject({ name: 'Rita’s start', comment: 'hers', version: 2 });
 		expect(log()).toHaveLength(lines);
 		// A stale delete is refused the same way, and the set stays.
-		expect(refusal(() => deleteParameterSet(editor, projectId, entryId, set.id, 1)).details).toMatchObject({ current: { name: 'Rita’s start' } });
+		expect(refusal(() => deleteParameterSet(editor, projectId, entryId, set.id, 1)).details).toMatchObject({
+			current: { name: 'Rita’s start' }
+		});
 		expect(listParameterSets(viewer, projectId, entryId)).toHaveLength(1);
 	});
 

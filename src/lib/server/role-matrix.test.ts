@@ -434,7 +434,9 @@ const SAMPLES: Record<string, Sample> = {
 	'ACTION /projects/:projectId/shelf/:entryId ?/editSet': {
 		form: (c) => ({ setId: parameterSetIn(c), name: 'renamed by the matrix', comment: '', version: '1' })
 	},
-	'ACTION /projects/:projectId/shelf/:entryId ?/deleteSet': { form: (c) => ({ setId: parameterSetIn(c), name: 'matrix set', version: '1' }) },
+	'ACTION /projects/:projectId/shelf/:entryId ?/deleteSet': {
+		form: (c) => ({ setId: parameterSetIn(c), name: 'matrix set', version: '1' })
+	},
 	'ACTION /projects/:projectId/shelf/:entryId ?/copy': { form: () => ({ projectId: targetProject() }) },
 	'ACTION /projects/:projectId/shelf/:entryId ?/move': { form: () => ({ projectId: targetProject() }) },
 	'POST /api/v1/projects/:projectId/shelf/:entryId/copy': { json: () => ({ projectId: targetProject() }) },
