@@ -88,27 +88,31 @@ test('an editor renames a saved set, a stale rename in a second tab is refused w
 	await second.setViewportSize({ width: 768, height: 900 });
 	await theirs.scrollIntoViewIfNeeded();
 	await shot(second, 'parameter-set-stale-768');
+	// Having seen theirs, saving again replaces them on purpose (the form now carries version 2).
+	await theirs.getByTestId('set-save').click();
+	await expect(theirs.getByTestId('set-saved')).toHaveText('Saved as “my own name” (version 3).');
+	await second.close();
 
 	// The viewer sees the set but no controls, and the API refuses a viewer's change.
 	await viewer.page.goto(entryUrl);
-	await expect(viewer.page.getByTestId('set-title')).toHaveText('start, ζ = 0');
+	await expect(viewer.page.getByTestId('set-title')).toHaveText('my own name');
 	await expect(viewer.page.getByTestId('set-edit')).toHaveCount(0);
 	await expect(viewer.page.getByTestId('set-delete')).toHaveCount(0);
 	const refused = await viewer.page.request.patch(`/api/v1/projects/${projectId}/shelf/${entryId}/parameters/${setId}`, {
-		data: { name: 'viewer', version: 2 }
+		data: { name: 'viewer', version: 3 }
 	});
 	expect(refused.status()).toBe(403);
 
 	// Delete after a confirmation that names the set and says the fit report stays.
 	await page.goto(entryUrl);
 	await set.getByText('Delete…').click();
-	await expect(set.getByTestId('set-delete-warning')).toContainText('Delete the parameter set “start, ζ = 0”?');
+	await expect(set.getByTestId('set-delete-warning')).toContainText('Delete the parameter set “my own name”?');
 	await expect(set.getByTestId('set-delete-warning')).toContainText('The fit report made from it stays: it keeps the starting values');
 	await page.setViewportSize({ width: 1280, height: 900 });
 	await set.scrollIntoViewIfNeeded();
 	await shot(page, 'parameter-set-delete-1280');
 	await set.getByTestId('set-delete-confirm').click();
-	await expect(page.getByTestId('set-deleted')).toContainText('Deleted the parameter set “start, ζ = 0”');
+	await expect(page.getByTestId('set-deleted')).toContainText('Deleted the parameter set “my own name”');
 	await expect(page.getByTestId('no-parameter-sets')).toBeVisible();
 	await expect(page.getByTestId('saved-fit')).toHaveCount(1);
 });
