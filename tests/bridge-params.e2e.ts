@@ -73,3 +73,34 @@ test('an F² typed in the Energy solver stays across tabs and drives the compute
 	await page.getByLabel('Notation').fill('2p2');
 	await expect(solver.getByTestId('param-F2(2p,2p)')).toHaveValue('30000');
 });
+
+test('a computed curve highlights under the pointer or keyboard focus, shows its level, and Enter keeps it', async ({ page }) => {
+	await page.setViewportSize({ width: 1280, height: 900 });
+	await page.goto('/builder?config=2p2');
+	const panel = await openComputed(page);
+	const curves = panel.getByTestId('bridge-sweep-curve');
+	const readout = panel.getByTestId('bridge-sweep-highlight');
+	// The first curve of the engine's list is the lowest J = 0 level, ³P₀ (p²: Condon & Shortley 1935, ch. VII).
+	await curves.first().focus();
+	await expect(curves.first()).toHaveAttribute('data-active', 'true');
+	await expect(panel.getByTestId('bridge-sweep-active-label')).toContainText('J = 0: ³P₀');
+	await expect(readout).toContainText('Highlighted: J = 0: ³P₀');
+	// Tab moves on to the next curve; the others are dimmed, only one is highlighted.
+	await page.keyboard.press('Tab');
+	await expect(curves.nth(1)).toHaveAttribute('data-active', 'true');
+	await expect(panel.locator('[data-testid="bridge-sweep-curve"][data-active="true"]')).toHaveCount(1);
+	await expect(readout).toContainText('J = 0: ¹S₀');
+	await page.keyboard.press('Enter');
+	await expect(curves.nth(1)).toHaveAttribute('aria-pressed', 'true');
+	await shot(page, 'bridge-params-highlight');
+	// Focus leaves; the kept curve stays highlighted until released.
+	await panel.getByRole('radio', { name: COMPUTED }).focus();
+	await expect(readout).toContainText('J = 0: ¹S₀');
+	await expect(readout).toContainText('kept');
+	await curves.nth(1).focus();
+	await page.keyboard.press('Enter');
+	await panel.getByRole('radio', { name: COMPUTED }).focus();
+	await expect(readout).toHaveText('');
+	// The text alternative stays: one row per curve.
+	await expect(panel.getByTestId('bridge-sweep-table').locator('tbody tr')).toHaveCount(5);
+});
