@@ -14,8 +14,9 @@ import { parseConfiguration } from '../src/lib/physics/parse';
 import type { SummaryRow } from './bench-summary';
 
 /**
- * The API keeps its block limit (MAX_BLOCK_DETERMINANTS) so that one request stays short; the bench
- * raises it to time 4f⁷ 5d (3 106 determinants in its M_J = ½ block).
+ * The engine's default block budget (MAX_BLOCK_DETERMINANTS, 1 200) is for direct callers; like the
+ * API's levels route (energy-validation.ts, 3 200), the bench raises it to time 4f⁷ 5d (3 106
+ * determinants in its M_J = 0 block).
  */
 const LIMITS = { maxBlock: 3200 };
 

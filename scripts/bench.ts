@@ -8,6 +8,7 @@ const BENCHES: { title: string; load: () => Promise<{ run?: () => Promise<Summar
 	{ title: 'Term engine: generating-function counting against explicit enumeration', load: () => import('./bench-terms') },
 	{ title: 'Exact Wigner symbols at the API limits, jj levels, Term sheets near the budget', load: () => import('./bench-wigner') },
 	{ title: 'Energy solver: intermediate-coupling levels', load: () => import('./bench-energy') },
+	{ title: 'Energy solver: 4f7 5d through the API task in a compute worker', load: () => import('./bench-energy-worker') },
 	{ title: 'Line matcher: sorted transitions and binary search against brute force', load: () => import('./bench-matcher') }
 ];
 

@@ -57,7 +57,8 @@ test('Energy solver API: 400s name the impossible integral and the size limit', 
 	let res = await request.post('/api/v1/energies', { data: { config: '3d2', parameters: { F: [{ k: 3, a: '3d', b: '3d', value: 1 }] } } });
 	expect(res.status()).toBe(400);
 	expect((await res.json()).error.message).toMatch(/F\^3\(3d,3d\) cannot occur/);
-	res = await request.post('/api/v1/energies', { data: { config: '4f7 5d' } });
+	// 4f⁷ 5d 6s: 3432 × 10 × 2 = 68 640 determinants, over the 40 000 a request may take.
+	res = await request.post('/api/v1/energies', { data: { config: '4f7 5d 6s' } });
 	expect(res.status()).toBe(400);
 	expect((await res.json()).error.message).toMatch(/at most \d+/);
 	res = await request.post('/api/v1/fit', { data: { config: '3d2', vary: ['Eav', 'F2(3d,3d)'], observed: [{ J: '2', energy: 0 }] } });
@@ -104,4 +105,28 @@ test('Energy solver: a literature set starts only the configuration it was deriv
 	await page.goto('/builder?config=[Ar] 3d8');
 	await page.getByRole('tab', { name: 'Energy solver' }).click();
 	await expect(page.getByTestId('energy-preset')).toHaveValue('ni2-3d8');
+});
+
+test('Energy solver: 4f7 5d, the largest configuration the API takes, in a compute worker: 3 106 levels, a paged table, a J filter', async ({
+	page
+}) => {
+	// 4f⁷ 5d: C(14,7) × 10 = 34 320 determinants, one state per level in the M_J = 0 block: 3 106 levels (binomial counts;
+	// the level count equals the LS count of terms.ts, checked in levels-ic.test.ts). Several seconds of work, hence the time.
+	test.setTimeout(150_000);
+	await page.goto('/builder?config=' + encodeURIComponent('4f7 5d'));
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	await expect(page.getByTestId('energy-progress')).toBeVisible();
+	const rows = page.locator('[data-testid="energy-levels"] tbody tr');
+	await expect(rows).toHaveCount(200, { timeout: 120_000 });
+	await expect(page.getByTestId('energy-level-count')).toHaveText('200 of 3106 levels shown');
+	// Hund's rules for 4f⁷ 5d: ⁹D°, and the lowest J = |L − S| = 2 for the less than half-filled 5d (heuristic).
+	await expect(rows.first()).toHaveAttribute('data-label', '9D°');
+	await expect(rows.first()).toHaveAttribute('data-j', '2');
+	await page.getByTestId('energy-level-more').click();
+	await expect(rows).toHaveCount(400);
+	await page.getByTestId('energy-level-filter').getByRole('combobox').selectOption('0');
+	await expect(page.getByTestId('energy-level-count')).toContainText('(3106 in all)');
+	for (const j of await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-j')))) expect(j).toBe('0');
+	await expect(page.getByTestId('energy-picture')).toContainText('The table lists every level');
+	await shot(page, 'energy-solver-4f7-5d');
 });

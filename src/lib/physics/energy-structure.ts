@@ -309,6 +309,9 @@ export function energyStructure(
 	const wQ = Math.E / 7;
 	const local = new Int32Array(n).fill(-1);
 	for (const idx of pieces.values()) {
+		// A term's states are taken from its lowest piece, max(−L, M_J − S) ≤ M_J (ls-terms.ts); the
+		// pieces above M_J start no term, and the ladder reaches them.
+		if (2 * block.ML[idx[0]] > block.twoMJ) continue;
 		const m = idx.length;
 		idx.forEach((i, a) => (local[i] = a));
 		for (const [twoS, vecs] of spinEigenvectors(S2, block, idx)) {

@@ -5,8 +5,9 @@
  * count of d² — 9 levels: ³F₂,₃,₄ ³P₀,₁,₂ ¹D₂ ¹G₄ ¹S₀ — from Condon & Shortley 1935, ch. VII).
  */
 import { afterAll, describe, expect, it } from 'vitest';
-import { CANCELLED_STATUS, closeComputePool, compute } from './pool';
-import { isLight, runTask } from './tasks';
+import { CANCELLED_STATUS, closeComputePool, compute, COMPUTE_TIMEOUT_MS } from './pool';
+import { isLight, runTask, taskTimeoutMs } from './tasks';
+import { ENERGY_TIMEOUT_MS } from './energy-tasks';
 
 afterAll(() => closeComputePool());
 
@@ -15,6 +16,12 @@ const D2 = { config: '3d2', parameters: { F: [{ k: 2, a: '3d', b: '3d', value: 6
 const F7 = { config: '4f7', parameters: { F: [{ k: 2, a: '4f', b: '4f', value: 90000 }], zeta: [{ shell: '4f', value: 1200 }] } };
 
 describe('Energy solver tasks in the compute pool', () => {
+	it('the Energy solver tasks carry their own time limit, longer than the pool default (4f⁷ 5d needs several seconds; product rule)', () => {
+		for (const name of ['energies', 'sweep', 'fit'] as const) expect(taskTimeoutMs(name)).toBe(ENERGY_TIMEOUT_MS);
+		expect(ENERGY_TIMEOUT_MS).toBeGreaterThan(COMPUTE_TIMEOUT_MS);
+		expect(taskTimeoutMs('terms')).toBeUndefined();
+	});
+
 	it('d² stays on the request thread, f⁷ goes to the pool', () => {
 		expect(isLight('energies', D2)).toBe(true);
 		expect(isLight('energies', F7)).toBe(false);

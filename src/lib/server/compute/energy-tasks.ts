@@ -23,9 +23,26 @@ function lightConfig(config: string, factor = 1): boolean {
 	}
 }
 
+/**
+ * The Energy solver's time limit in a worker (COMPUTE_ENERGY_TIMEOUT_MS, default 60 s): the largest
+ * configurations the API takes (4f⁷ 5d) need several seconds cold, more on a busy machine.
+ */
+export const ENERGY_TIMEOUT_MS = (() => {
+	const v = Number(process.env.COMPUTE_ENERGY_TIMEOUT_MS);
+	return Number.isFinite(v) && v > 0 ? v : 60_000;
+})();
+
 type Body = { config: string; points?: number };
 
-export const energies: ComputeTask<Body> = { light: (b) => lightConfig(b.config), run: (b) => computeEnergies(b) };
+export const energies: ComputeTask<Body> = {
+	light: (b) => lightConfig(b.config),
+	run: (b) => computeEnergies(b),
+	timeoutMs: ENERGY_TIMEOUT_MS
+};
 // A sweep solves the matrix at every point, a fit at every iteration: each counts as several solutions.
-export const sweep: ComputeTask<Body> = { light: (b) => lightConfig(b.config, (b.points ?? 61) / 4), run: (b) => computeSweep(b) };
-export const fit: ComputeTask<Body> = { light: (b) => lightConfig(b.config, 10), run: (b) => computeFit(b) };
+export const sweep: ComputeTask<Body> = {
+	light: (b) => lightConfig(b.config, (b.points ?? 61) / 4),
+	run: (b) => computeSweep(b),
+	timeoutMs: ENERGY_TIMEOUT_MS
+};
+export const fit: ComputeTask<Body> = { light: (b) => lightConfig(b.config, 10), run: (b) => computeFit(b), timeoutMs: ENERGY_TIMEOUT_MS };

@@ -7,7 +7,8 @@
  * - Threads: COMPUTE_THREADS, default one less than the machine's cores (at least 1), so a core
  *   stays free for the request thread. Each thread's heap is capped (COMPUTE_HEAP_MB, 512 MB):
  *   a runaway task ends its worker, not the server.
- * - Time: a task that runs longer than COMPUTE_TIMEOUT_MS (default 10 000) is stopped (its
+ * - Time: a task that runs longer than COMPUTE_TIMEOUT_MS (default 10 000), or its own limit
+ *   (the Energy solver's tasks: COMPUTE_ENERGY_TIMEOUT_MS, default 60 000), is stopped (its
  *   thread is terminated) and answered 503. Queue: at most COMPUTE_QUEUE (default 64) waiting
  *   tasks, then 503 "busy".
  * - The worker file: build/compute-worker.js in the built app (scripts/build-worker.js), or
@@ -19,7 +20,7 @@ import { availableParallelism } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
-import { errorBody, isLight, runTask, type TaskArgs, type TaskName, type TaskResult } from './tasks';
+import { errorBody, isLight, runTask, taskTimeoutMs, type TaskArgs, type TaskName, type TaskResult } from './tasks';
 
 const numberFromEnv = (name: string, fallback: number) => {
 	const v = Number(process.env[name]);
@@ -31,6 +32,11 @@ export const COMPUTE_TIMEOUT_MS = numberFromEnv('COMPUTE_TIMEOUT_MS', 10_000);
 const THREADS = numberFromEnv('COMPUTE_THREADS', Math.max(1, availableParallelism() - 1));
 const QUEUE = numberFromEnv('COMPUTE_QUEUE', 64);
 const HEAP_MB = numberFromEnv('COMPUTE_HEAP_MB', 512);
+/**
+ * A thread idle this long ends. Long enough (COMPUTE_IDLE_MS, default 10 min) that a worker keeps
+ * the energy structures it built (energy-structure.ts caches them) while someone edits parameters.
+ */
+const IDLE_MS = numberFromEnv('COMPUTE_IDLE_MS', 600_000);
 
 /** Where the worker entry is, and how to load it. */
 function workerEntry(): { filename: string; execArgv: string[] } | null {
@@ -67,7 +73,7 @@ function getPool(): Piscina | null {
 		minThreads: 0,
 		maxThreads: THREADS,
 		maxQueue: QUEUE,
-		idleTimeout: 30_000,
+		idleTimeout: IDLE_MS,
 		resourceLimits: { maxOldGenerationSizeMb: HEAP_MB }
 	});
 	return pool;
@@ -114,7 +120,7 @@ export async function compute<N extends TaskName>(
 	const p = getPool();
 	if (!p) return inline();
 	const where = 'worker' as const;
-	const timeoutMs = options.timeoutMs ?? COMPUTE_TIMEOUT_MS;
+	const timeoutMs = options.timeoutMs ?? taskTimeoutMs(name) ?? COMPUTE_TIMEOUT_MS;
 	if (options.signal?.aborted) return { where, status: CANCELLED_STATUS, body: errorBody('the computation was cancelled') };
 	const timeout = AbortSignal.timeout(timeoutMs);
 	const signal = options.signal ? AbortSignal.any([timeout, options.signal]) : timeout;

@@ -34,10 +34,14 @@ export interface TaskResult {
 	body: string;
 }
 
-/** One compute task: `run` does the work, `light` says whether it may run on the request thread. */
+/**
+ * One compute task: `run` does the work, `light` says whether it may run on the request thread,
+ * `timeoutMs` (when set) replaces the pool's default time limit for this task.
+ */
 export interface ComputeTask<A> {
 	run(args: A): unknown;
 	light(args: A): boolean;
+	timeoutMs?: number;
 }
 
 const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
@@ -209,6 +213,11 @@ export function runTask<N extends TaskName>(name: N, args: TaskArgs<N>): TaskRes
 		if (e instanceof RangeError) return { status: 400, body: errorBody(e.message) };
 		throw e;
 	}
+}
+
+/** The task's own time limit in ms, if it has one. */
+export function taskTimeoutMs(name: TaskName): number | undefined {
+	return (TASKS[name] as ComputeTask<unknown> | undefined)?.timeoutMs;
 }
 
 /** Whether the task may run on the request thread; bad input (which fails fast anyway) counts as light. */

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
-import { computeEnergies, computeFit, computeSweep, API_LIMITS } from './energy';
+import { computeEnergies, computeFit, computeSweep, API_LIMITS, REPEATED_LIMITS } from './energy';
+import { checkDeterminantBudget } from '../../physics/determinants';
+import { parseConfiguration } from '../../physics/parse';
 
 const d2 = {
 	config: '3d2',
@@ -48,13 +50,26 @@ describe('POST /api/v1/energies (service)', () => {
 		expect(bad({ config: '3d2', gs: 'other' })).toMatch(/gs must be "exact"/);
 	});
 	it('refuses configurations over the request budget, stating the limit', () => {
-		expect(() => computeEnergies({ config: '4f6 5d' })).toThrow(
+		// 4f⁷ 5d 6s: 3432 × 10 × 2 = 68 640 determinants (binomial counts), over the 40 000 allowed.
+		expect(() => computeEnergies({ config: '4f7 5d 6s' })).toThrow(
 			new RegExp(`at most ${API_LIMITS.maxBlock}|at most ${API_LIMITS.maxTotal}`)
 		);
+	});
+	it('admits 4f7 5d (34 320 determinants, 3 106 in the central block) within the budget', () => {
+		// C(14,7) × C(10,1) = 3432 × 10 = 34 320 (binomial counts); the block holds one state per level.
+		expect(checkDeterminantBudget(parseConfiguration('4f7 5d'), API_LIMITS)).toMatchObject({ total: 34320, block: 3106 });
 	});
 });
 
 describe('POST /api/v1/energies/sweep and /api/v1/fit (service)', () => {
+	it('sweeps and fits only smaller configurations, stating the limit (they solve the levels many times)', () => {
+		// 4f⁵ 5d: C(14,5) × 10 = 20 020 determinants, over the 12 000 a sweep or fit may take; 4f⁴ 5d (10 010) is within.
+		expect(() => computeSweep({ config: '4f5 5d' })).toThrow(new RegExp(`at most ${REPEATED_LIMITS.maxTotal}`));
+		expect(() => computeFit({ config: '4f5 5d', vary: ['Eav'], observed: [{ J: '1/2', energy: 0 }] })).toThrow(
+			new RegExp(`at most ${REPEATED_LIMITS.maxTotal}`)
+		);
+		expect(checkDeterminantBudget(parseConfiguration('4f4 5d'), REPEATED_LIMITS).total).toBe(10010);
+	});
 	it('sweeps with the default 61 points', () => {
 		expect(computeSweep(d2).t).toHaveLength(61);
 		expect(() => computeSweep({ ...d2, points: 500 })).toThrow(/points must be from 2 to 201/);

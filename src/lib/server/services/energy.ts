@@ -8,14 +8,18 @@ import { fitParameters } from '../../physics/fit';
 import { GS_FREE_ELECTRON } from '../../physics/lande';
 import {
 	API_MAX_BLOCK_DETERMINANTS,
+	API_MAX_BLOCK_REPEATED,
 	API_MAX_TOTAL_DETERMINANTS,
+	API_MAX_TOTAL_REPEATED,
 	energiesRequestSchema,
 	fitRequestSchema,
 	sweepRequestSchema
 } from '../energy-validation';
 
-/** The determinant budgets of one request (the engine states them in its RangeError). */
+/** The determinant budgets of one request for levels (the engine states them in its RangeError). */
 export const API_LIMITS = { maxBlock: API_MAX_BLOCK_DETERMINANTS, maxTotal: API_MAX_TOTAL_DETERMINANTS } as const;
+/** The budgets of a sweep or a fit, which solve the levels many times. */
+export const REPEATED_LIMITS = { maxBlock: API_MAX_BLOCK_REPEATED, maxTotal: API_MAX_TOTAL_REPEATED } as const;
 
 /** Components below this percentage are left out of API answers (they are tiny; the full sums are 100 %). */
 export const REPORTED_COMPONENT_FLOOR = 0.01;
@@ -41,7 +45,7 @@ export function computeEnergies(body: unknown): IcResult & { limits: typeof API_
 /** POST /api/v1/energies/sweep. */
 export function computeSweep(body: unknown) {
 	const input = sweepRequestSchema.parse(body);
-	return { ...couplingSweep(input.config, input.parameters, { points: input.points, limits: API_LIMITS }), limits: API_LIMITS };
+	return { ...couplingSweep(input.config, input.parameters, { points: input.points, limits: REPEATED_LIMITS }), limits: REPEATED_LIMITS };
 }
 
 /** POST /api/v1/fit. */
@@ -51,8 +55,8 @@ export function computeFit(body: unknown) {
 		...fitParameters(
 			input.config,
 			{ parameters: input.parameters, vary: input.vary, links: input.links, bounds: input.bounds, observed: input.observed },
-			{ limits: API_LIMITS }
+			{ limits: REPEATED_LIMITS }
 		),
-		limits: API_LIMITS
+		limits: REPEATED_LIMITS
 	};
 }
