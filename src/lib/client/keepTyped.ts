@@ -14,6 +14,7 @@ export function keepTyped(onSuccess?: () => void, options: { reloadOnConflict?: 
 		async ({ result, update }) => {
 			await update({ reset: false });
 			if (result.type === 'success') onSuccess?.();
-			else if (options.reloadOnConflict && result.type === 'failure' && (result.status === 409 || result.status === 404)) await invalidateAll();
+			else if (options.reloadOnConflict && result.type === 'failure' && (result.status === 409 || result.status === 404))
+				await invalidateAll();
 		};
 }
