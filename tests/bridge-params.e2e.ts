@@ -72,6 +72,13 @@ test('an F² typed in the Energy solver stays across tabs and drives the compute
 	await expect(solver.getByTestId('param-F2(3d,3d)')).not.toHaveValue('30000');
 	await page.getByLabel('Notation').fill('2p2');
 	await expect(solver.getByTestId('param-F2(2p,2p)')).toHaveValue('30000');
+
+	// A reload of the page keeps the edit (the tab's session storage); the computed curves still use it.
+	await page.reload();
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	await expect(solver.getByTestId('param-F2(2p,2p)')).toHaveValue('30000');
+	panel = await openComputed(page);
+	await expect(params).toContainText('F²(2p,2p) = 30 000');
 });
 
 test('a computed curve highlights under the pointer or keyboard focus, shows its level, and Enter keeps it', async ({ page }) => {

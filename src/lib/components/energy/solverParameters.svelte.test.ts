@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { flushSync } from 'svelte';
-import { isEdited, solverBody, SolverParameters, type SolverSet } from './solverParameters.svelte';
+import { isEdited, solverBody, SOLVER_STORAGE_KEY, SolverParameters, type SolverSet } from './solverParameters.svelte';
 import { presetsFor, presetValues, startingPreset } from './presets';
 
 const IDS = ['F2(2p,2p)', 'zeta(2p)'];
@@ -64,5 +64,26 @@ describe('SolverParameters', () => {
 	it('the body scales F^k by the scaling, not ζ', () => {
 		const set = { ...startOf2p2(), values: { 'F2(2p,2p)': 40000, 'zeta(2p)': 30 }, scale: 50, Eav: 7 };
 		expect(solverBody(set)).toEqual({ Eav: 7, F: [{ k: 2, a: '2p', b: '2p', value: 20000 }], G: [], zeta: [{ shell: '2p', value: 30 }] });
+	});
+
+	it('with a storage, a kept set survives a new store (a reload of the page); malformed entries are dropped', () => {
+		const data = new Map<string, string>();
+		const storage = { getItem: (k: string) => data.get(k) ?? null, setItem: (k: string, v: string) => void data.set(k, v) };
+		const set = startOf2p2();
+		set.values['F2(2p,2p)'] = 31000;
+		new SolverParameters(storage).keep('2p2', set);
+		const saved = JSON.parse(data.get(SOLVER_STORAGE_KEY)!);
+		saved['3d2'] = { ids: 'not a list' };
+		data.set(SOLVER_STORAGE_KEY, JSON.stringify(saved));
+		const again = new SolverParameters(storage);
+		expect(again.get('2p2', IDS)?.values['F2(2p,2p)']).toBe(31000);
+		expect(again.get('3d2')).toBeNull();
+		again.forget('2p2');
+		expect(new SolverParameters(storage).get('2p2')).toBeNull();
+	});
+
+	it('unreadable storage starts empty instead of failing', () => {
+		const storage = { getItem: () => '{not json', setItem: () => {} };
+		expect(new SolverParameters(storage).get('2p2')).toBeNull();
 	});
 });

@@ -34,8 +34,52 @@ export function solverBody(set: SolverSet): EnergyParametersBody {
 /** The trimmed configuration text is the key, as the solver and the bridge both send it. */
 const keyOf = (config: string) => config.trim();
 
+/** The session-storage key of the kept sets (one browser tab keeps them across reloads). */
+export const SOLVER_STORAGE_KEY = 'termwright.solver-parameters';
+
+/** A kept set read back from storage: the shape is checked, anything else is dropped. */
+function isSolverSet(x: unknown): x is SolverSet {
+	const s = x as SolverSet;
+	const numbers = (r: unknown) => !!r && typeof r === 'object' && Object.values(r).every((v) => typeof v === 'number');
+	return (
+		!!s &&
+		Array.isArray(s.ids) &&
+		s.ids.every((id) => typeof id === 'string') &&
+		typeof s.presetId === 'string' &&
+		numbers(s.values) &&
+		typeof s.Eav === 'number' &&
+		typeof s.scale === 'number' &&
+		!!s.start &&
+		numbers(s.start.values) &&
+		typeof s.start.Eav === 'number'
+	);
+}
+
 export class SolverParameters {
 	#sets = $state<Record<string, SolverSet>>({});
+	#storage: Pick<Storage, 'getItem' | 'setItem'> | undefined;
+
+	/**
+	 * With `storage` (the Builder passes the tab's sessionStorage), the sets also survive a reload of
+	 * the page; without it (server rendering, tests) they live as long as the page.
+	 */
+	constructor(storage?: Pick<Storage, 'getItem' | 'setItem'>) {
+		this.#storage = storage;
+		try {
+			const saved = JSON.parse(storage?.getItem(SOLVER_STORAGE_KEY) ?? '{}') as Record<string, unknown>;
+			for (const [config, set] of Object.entries(saved ?? {})) if (isSolverSet(set)) this.#sets[config] = set;
+		} catch {
+			// Unreadable storage starts empty: the solver starts from its presets.
+		}
+	}
+
+	#save(): void {
+		try {
+			this.#storage?.setItem(SOLVER_STORAGE_KEY, JSON.stringify($state.snapshot(this.#sets)));
+		} catch {
+			// A full or blocked storage only costs the reload memory.
+		}
+	}
 
 	/** The set kept for `config` with exactly these parameter ids (`ids` omitted: any), else null. */
 	get(config: string, ids?: readonly string[]): SolverSet | null {
@@ -49,9 +93,11 @@ export class SolverParameters {
 	keep(config: string, set: SolverSet): void {
 		const copy = $state.snapshot(set) as SolverSet;
 		this.#sets[keyOf(config)] = copy;
+		this.#save();
 	}
 
 	forget(config: string): void {
 		delete this.#sets[keyOf(config)];
+		this.#save();
 	}
 }
