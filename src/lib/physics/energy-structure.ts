@@ -26,11 +26,11 @@ import {
 	type DeterminantBlock,
 	type OrbitalSet
 } from './determinants';
-import { parameterMatrices, type ParameterMatrices } from './hamiltonian';
+import { parameterMatrices } from './hamiltonian';
 import { denseSubmatrix, jSquared, lSquared, pairing, seniorityFromPairing, sSquared, type SparseSymmetric } from './momentum-operators';
 import { radialParameters, shellName, type RadialParameter } from './slater-parameters';
 import { symmetricEigen } from './symmetric-eigen';
-import { blockTerms, termJSpaces, type RowsOfH, type SparseVector } from './ls-terms';
+import { blockTerms, rowsOfH, termJSpaces, termPieces, type SparseVector } from './ls-terms';
 import { asSubshells, formatConfiguration } from './parse';
 import { halfString } from './half';
 
@@ -73,8 +73,6 @@ export interface EnergyStructure {
 	lsClasses: LsClass[];
 	jjClasses: JjClass[];
 	spaces: JSpace[];
-	/** Built with the sparse per-parameter matrices of the block (kept for tests and derivatives). */
-	matrices: ParameterMatrices;
 }
 
 const cache = new Map<string, EnergyStructure>();
@@ -107,35 +105,6 @@ function remember(key: string, s: EnergyStructure): void {
 /** Empties the structure cache (benchmarks measure cold runs with it). */
 export function clearEnergyCache(): void {
 	cache.clear();
-}
-
-/** Every parameter matrix's entries by source row (both triangles): row i feeds column `col[k]`. */
-function rowsOfH(m: ParameterMatrices): RowsOfH {
-	const { rows, cols, coef, param } = m;
-	const count = new Int32Array(m.n + 1);
-	for (let e = 0; e < rows.length; e++) {
-		count[rows[e] + 1]++;
-		if (rows[e] !== cols[e]) count[cols[e] + 1]++;
-	}
-	for (let i = 0; i < m.n; i++) count[i + 1] += count[i];
-	const fill = count.slice(0, m.n);
-	const out: RowsOfH = {
-		start: count,
-		col: new Int32Array(count[m.n]),
-		coef: new Float64Array(count[m.n]),
-		param: new Int32Array(count[m.n])
-	};
-	const put = (from: number, to: number, e: number) => {
-		const k = fill[from]++;
-		out.col[k] = to;
-		out.coef[k] = coef[e];
-		out.param[k] = param[e];
-	};
-	for (let e = 0; e < rows.length; e++) {
-		put(rows[e], cols[e], e);
-		if (rows[e] !== cols[e]) put(cols[e], rows[e], e);
-	}
-	return out;
 }
 
 /** A vector on a few positions of a piece: `pos` are piece-local positions, `val` the values there. */
@@ -342,6 +311,8 @@ export function energyStructure(
 					lsClasses.push({ twoS, L, seniority });
 					lsIndex.set(ck, cls);
 				}
+				// Only a term's lowest piece gives its states (the ladder makes the others).
+				if (block.ML[idx[0]] !== termPieces(block.twoMJ, twoS, L).from) continue;
 				const nz: number[] = [];
 				for (let t = 0; t < m; t++) if (val[t] !== 0) nz.push(t);
 				const key = `${cls},${block.ML[idx[0]]}`;
@@ -424,8 +395,7 @@ export function energyStructure(
 		blockSize: n,
 		lsClasses,
 		jjClasses,
-		spaces,
-		matrices
+		spaces
 	};
 	remember(key, structure);
 	return structure;

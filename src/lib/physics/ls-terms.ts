@@ -18,8 +18,9 @@
  *   largest 3j product; the J matrices then follow from the Clebsch–Gordan sums.
  */
 import type { DeterminantBlock } from './determinants';
+import type { ParameterMatrices } from './hamiltonian';
 import type { SparseSymmetric } from './momentum-operators';
-import { clebschGordanFloat, isTriad, wigner3jFloat } from './wigner';
+import { clebschGordanFloat, wigner3jFloat } from './wigner';
 
 /** A vector on a few positions of the block: `pos` are block indices, `val` the values there. */
 export interface SparseVector {
@@ -100,12 +101,41 @@ export function blockTerms(
 	return out;
 }
 
-/** H_p u for every parameter p, dense over the block (rows of H by source row, both triangles). */
+/** Every parameter matrix's entries by source row (both triangles): row i feeds column `col[k]` of parameter `param[k]`. */
 export interface RowsOfH {
 	start: Int32Array;
 	col: Int32Array;
 	coef: Float64Array;
 	param: Int32Array;
+}
+
+/** The sparse upper-triangle matrices of hamiltonian.ts as rows of both triangles, for H u products. */
+export function rowsOfH(m: ParameterMatrices): RowsOfH {
+	const { rows, cols, coef, param } = m;
+	const count = new Int32Array(m.n + 1);
+	for (let e = 0; e < rows.length; e++) {
+		count[rows[e] + 1]++;
+		if (rows[e] !== cols[e]) count[cols[e] + 1]++;
+	}
+	for (let i = 0; i < m.n; i++) count[i + 1] += count[i];
+	const fill = count.slice(0, m.n);
+	const out: RowsOfH = {
+		start: count,
+		col: new Int32Array(count[m.n]),
+		coef: new Float64Array(count[m.n]),
+		param: new Int32Array(count[m.n])
+	};
+	const put = (from: number, to: number, e: number) => {
+		const k = fill[from]++;
+		out.col[k] = to;
+		out.coef[k] = coef[e];
+		out.param[k] = param[e];
+	};
+	for (let e = 0; e < rows.length; e++) {
+		put(rows[e], cols[e], e);
+		if (rows[e] !== cols[e]) put(cols[e], rows[e], e);
+	}
+	return out;
 }
 
 function applyTo(H: RowsOfH, u: SparseVector, out: Float64Array[], only: Uint8Array): void {
@@ -304,9 +334,8 @@ export function termJSpaces(block: DeterminantBlock, H: RowsOfH, terms: readonly
 					const C = coulomb.get(key);
 					const R = reduced.get(key);
 					if (!C && !R) continue;
-					const A = terms[t1];
-					const B = terms[t2];
-					const f = R && isTriad(2 * A.L, A.twoS, twoJ) && isTriad(2 * B.L, B.twoS, twoJ) ? jFactor(twoJ, A.twoS, A.L, B.twoS, B.L) : 0;
+					// Both terms have a state of this J (byJ), so the Clebsch–Gordan sum is defined.
+					const f = R ? jFactor(twoJ, terms[t1].twoS, terms[t1].L, terms[t2].twoS, terms[t2].L) : 0;
 					for (let p = 0; p < np; p++) {
 						const v = spinOrbit[p] ? (R ? f * R[p] : 0) : C ? C[p] : 0;
 						param[p][a * dim + b] = v;
