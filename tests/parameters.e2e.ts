@@ -1,20 +1,13 @@
 import { expect, test, type Page } from '@playwright/test';
 import { newUser, shot } from './helpers';
+import { INVENTED_3D2_OBSERVED } from './fixtures/invented-3d2';
 
 /*
- * Parameter sets and fit reports on a Shelf entry, in the browser. The five observed 3d² levels are
- * invented from Racah's B = 800, C = 3200 cm⁻¹ with ζ = 0 (Racah 1942; Condon & Shortley 1935 §7⁵):
- * above ³F, ³P lies at 15B = 12000, ¹D at 5B + 2C = 10400, ¹G at 12B + 2C = 16000 and ¹S at
- * 22B + 7C = 40000 cm⁻¹. A fit of E_av, F² and F⁴ to them has 5 − 3 = 2 degrees of freedom and an
- * rms of 0 (the data are exact).
+ * Parameter sets and fit reports on a Shelf entry, in the browser, on the invented 3d² ion of
+ * tests/fixtures/invented-3d2.ts (its five levels from Racah's B = 800, C = 3200 cm⁻¹, ζ = 0; sources
+ * there). A fit of E_av, F² and F⁴ to them has 5 − 3 = 2 degrees of freedom and an rms of 0 (the data are exact).
  */
-const OBSERVED: [string, number][] = [
-	['3F#1|2', 0],
-	['1D#1|2', 10400],
-	['3P#1|0', 12000],
-	['1G#1|4', 16000],
-	['1S#1|0', 40000]
-];
+const OBSERVED = INVENTED_3D2_OBSERVED;
 
 async function solverReady(page: Page) {
 	await page.getByTestId('open-solver').click();

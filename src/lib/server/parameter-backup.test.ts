@@ -16,6 +16,7 @@ import { createParameterSet, updateParameterSet } from './services/parameter-set
 import { fitAndSave } from './services/fit-reports';
 import { exportProject, importProject } from './services/backup';
 import { statusOf } from './status-of';
+import { INVENTED_3D2_OBSERVED, INVENTED_3D2_START } from '../../../tests/fixtures/invented-3d2';
 
 let owner: Actor, editor: Actor, projectId: string;
 
@@ -40,14 +41,7 @@ function snapshot(pid: string) {
 	};
 }
 
-const START = {
-	Eav: 0,
-	F: [
-		{ k: 2, a: '3d', b: '3d', value: 55000 },
-		{ k: 4, a: '3d', b: '3d', value: 36000 }
-	],
-	zeta: [{ shell: '3d', value: 0 }]
-};
+const START = INVENTED_3D2_START;
 
 beforeAll(async () => {
 	owner = await signUp({ name: 'Ruth Owner', email: 'ruth@example.org', password: 'long-enough-pw' });
@@ -55,15 +49,14 @@ beforeAll(async () => {
 	projectId = createProject(owner, { name: 'Invented ions' }).id;
 	addMember(owner, projectId, { email: 'karl@example.org', role: 'editor' });
 	const entryId = createEntry(editor, projectId, { title: 'Invented 3d2', notation: '3d2' }).id;
-	const levels: [string, string][] = [
-		['3F#1|2', '0'],
-		['1D#1|2', '10400'],
-		['3P#1|0', '12000'],
-		['1G#1|4', '16000'],
-		['1S#1|0', '40000']
-	];
-	for (const [levelKey, energy] of levels)
-		saveAnnotation(editor, projectId, entryId, { levelKey, observedEnergy: energy, uncertainty: '2', status: 'proposed', comment: '' });
+	for (const [levelKey, energy] of INVENTED_3D2_OBSERVED)
+		saveAnnotation(editor, projectId, entryId, {
+			levelKey,
+			observedEnergy: String(energy),
+			uncertainty: '2',
+			status: 'proposed',
+			comment: ''
+		});
 	const set = createParameterSet(editor, projectId, entryId, { name: 'start', parameters: START, comment: 'invented, “quoted”' });
 	updateParameterSet(owner, projectId, entryId, set.id, { comment: 'changed by the owner', version: 1 });
 	createParameterSet(owner, projectId, entryId, { name: 'second', parameters: { F: [{ k: 2, a: '3d', b: '3d', value: 60000 }] } });

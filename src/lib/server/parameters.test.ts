@@ -4,12 +4,7 @@
  * what the engine returned, and the exports read as the Shelf's other tables (product rules,
  * common practice, no source, except where a physics source is named beside a value).
  *
- * The 3d² levels are invented from Racah parameters B = 800, C = 3200 cm⁻¹ with ζ = 0, using
- * Racah's term energies (Racah 1942, Phys. Rev. 62, 438; Condon & Shortley 1935 §7⁵):
- * ³F = A − 8B, ³P = A + 7B, ¹D = A − 3B + 2C, ¹G = A + 4B + 2C, ¹S = A + 14B + 7C,
- * so above ³F: ³P 15B = 12000, ¹D 5B + 2C = 10400, ¹G 12B + 2C = 16000, ¹S 22B + 7C = 40000.
- * With F_2 = F²/49, F_4 = F⁴/441, B = F_2 − 5F_4, C = 35F_4 (Condon & Shortley 1935 §6⁸; Racah 1942):
- * F⁴ = 441·C/35 = 40320 and F² = 49·(B + C/7) = 61600 cm⁻¹.
+ * The invented 3d² ion and its sources: tests/fixtures/invented-3d2.ts.
  */
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Actor } from './access';
@@ -24,26 +19,13 @@ import { fitAndSave, getFitReport, listFitReports, prepareEntryFit } from './ser
 import { exportFitReport } from './services/exports';
 import { fitParameters } from '../physics/fit';
 import { refusal, statusOf } from './status-of';
+import { INVENTED_3D2_OBSERVED, INVENTED_3D2_START } from '../../../tests/fixtures/invented-3d2';
 
 let editor: Actor, reviewer: Actor, viewer: Actor, stranger: Actor, projectId: string, entryId: string;
 
-/** Observed levels of the invented 3d² ion (see the file comment), with uncertainties 1 cm⁻¹. */
-const OBSERVED: [string, number][] = [
-	['3F#1|2', 0],
-	['1D#1|2', 10400],
-	['3P#1|0', 12000],
-	['1G#1|4', 16000],
-	['1S#1|0', 40000]
-];
-
-const START = {
-	Eav: 0,
-	F: [
-		{ k: 2, a: '3d', b: '3d', value: 55000 },
-		{ k: 4, a: '3d', b: '3d', value: 36000 }
-	],
-	zeta: [{ shell: '3d', value: 0 }]
-};
+/** Observed levels of the invented 3d² ion, with uncertainties 1 cm⁻¹. */
+const OBSERVED = INVENTED_3D2_OBSERVED;
+const START = INVENTED_3D2_START;
 const VARY = ['Eav', 'F2(3d,3d)', 'F4(3d,3d)'];
 
 beforeAll(async () => {
