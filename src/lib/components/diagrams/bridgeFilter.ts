@@ -4,13 +4,11 @@
  * order within each column is the API's schematic order, filtered. Only data, no physics.
  */
 import type { BridgeResponse } from '$lib/api/types';
+import { countByJ } from '$lib/components/jValues';
 
 /** The J values of a bridge in increasing order, with how many levels each has (one side; both sides agree). */
 export function bridgeJValues(data: Pick<BridgeResponse, 'ls'>): { J: string; count: number }[] {
-	const counts = new Map<string, number>();
-	for (const l of data.ls) counts.set(l.J, (counts.get(l.J) ?? 0) + 1);
-	const value = (J: string) => (J.endsWith('/2') ? Number(J.slice(0, -2)) / 2 : Number(J));
-	return [...counts].map(([J, count]) => ({ J, count })).sort((a, b) => value(a.J) - value(b.J));
+	return countByJ(data.ls);
 }
 
 /** Keeps the items whose J is chosen; `index` maps an old position to the new one. */

@@ -4,9 +4,10 @@
  * ¹D₂ ¹G₄ ¹S₀: J = 0 ×2, 1 ×1, 2 ×3, 3 ×1, 4 ×2) are from Condon & Shortley 1935, ch. VII.
  */
 import { describe, expect, it } from 'vitest';
-import { jCounts, levelWindow, placeLabels } from './levelWindow';
+import { levelWindow, placeLabels } from './levelWindow';
+import { countByJ } from '../jValues';
 
-const level = (J: string, relative: number) => ({ J, twoJ: J.includes('/') ? Number(J.split('/')[0]) : 2 * Number(J), relative });
+const level = (J: string, relative: number) => ({ J, relative });
 // d² in an invented order of energies.
 const D2 = [
 	level('2', 0),
@@ -38,9 +39,9 @@ describe('levelWindow', () => {
 	});
 });
 
-describe('jCounts', () => {
+describe('countByJ (the J filter of the level table)', () => {
 	it('d²: J = 0 ×2, 1 ×1, 2 ×3, 3 ×1, 4 ×2, smallest J first', () =>
-		expect(jCounts(D2)).toEqual([
+		expect(countByJ(D2)).toEqual([
 			{ J: '0', count: 2 },
 			{ J: '1', count: 1 },
 			{ J: '2', count: 3 },
@@ -48,7 +49,7 @@ describe('jCounts', () => {
 			{ J: '4', count: 2 }
 		]));
 	it('sorts half-integer J by value (1/2 before 3/2 before 11/2)', () =>
-		expect(jCounts([level('11/2', 0), level('1/2', 1), level('3/2', 2)]).map((c) => c.J)).toEqual(['1/2', '3/2', '11/2']));
+		expect(countByJ([level('11/2', 0), level('1/2', 1), level('3/2', 2)]).map((c) => c.J)).toEqual(['1/2', '3/2', '11/2']));
 });
 
 describe('placeLabels', () => {

@@ -6,7 +6,6 @@
 
 export interface WindowLevel {
 	J: string;
-	twoJ: number;
 	relative: number;
 }
 
@@ -42,17 +41,6 @@ export function levelWindow<L extends WindowLevel>(levels: readonly L[], options
 		if (rows.length < options.limit) rows.push({ level, rank: i + 1 });
 	});
 	return { rows, matching, total: levels.length };
-}
-
-/** The J values of an answer with their level counts, smallest J first. */
-export function jCounts(levels: readonly WindowLevel[]): { J: string; count: number }[] {
-	const byTwoJ = new Map<number, { J: string; count: number }>();
-	for (const l of levels) {
-		const hit = byTwoJ.get(l.twoJ);
-		if (hit) hit.count++;
-		else byTwoJ.set(l.twoJ, { J: l.J, count: 1 });
-	}
-	return [...byTwoJ.entries()].sort((a, b) => a[0] - b[0]).map(([, v]) => v);
 }
 
 /**

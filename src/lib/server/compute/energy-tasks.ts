@@ -7,6 +7,7 @@ import type { ComputeTask } from './tasks';
 import { computeEnergies, computeFit, computeSweep } from '../services/energy';
 import { determinantCounts } from '../../physics/determinants';
 import { parseConfiguration } from '../../physics/parse';
+import { numberFromEnv } from './env-number';
 
 /**
  * At most this many determinants in the whole configuration run on the request thread (3d⁴ has
@@ -27,10 +28,7 @@ function lightConfig(config: string, factor = 1): boolean {
  * The Energy solver's time limit in a worker (COMPUTE_ENERGY_TIMEOUT_MS, default 60 s): the largest
  * configurations the API takes (4f⁷ 5d) need several seconds cold, more on a busy machine.
  */
-export const ENERGY_TIMEOUT_MS = (() => {
-	const v = Number(process.env.COMPUTE_ENERGY_TIMEOUT_MS);
-	return Number.isFinite(v) && v > 0 ? v : 60_000;
-})();
+export const ENERGY_TIMEOUT_MS = numberFromEnv('COMPUTE_ENERGY_TIMEOUT_MS', 60_000);
 
 type Body = { config: string; points?: number };
 

@@ -20,12 +20,8 @@ import { availableParallelism } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
+import { numberFromEnv } from './env-number';
 import { errorBody, isLight, runTask, taskTimeoutMs, type TaskArgs, type TaskName, type TaskResult } from './tasks';
-
-const numberFromEnv = (name: string, fallback: number) => {
-	const v = Number(process.env[name]);
-	return Number.isFinite(v) && v > 0 ? v : fallback;
-};
 
 /** Longest a pooled task may run, in ms. */
 export const COMPUTE_TIMEOUT_MS = numberFromEnv('COMPUTE_TIMEOUT_MS', 10_000);
