@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { addEntry, addMember, createProject, newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, expect, newUser, shot, test } from './helpers';
 
 test('the project Activity page lists each change, filters by kind and person, and viewers read it', async ({ browser }) => {
 	const owner = await newUser(browser, 'Alma Owner', 'activity-owner');

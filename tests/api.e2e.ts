@@ -1,7 +1,7 @@
 /**
  * The public compute API, as scripts use it. Check values name their sources.
  */
-import { expect, test } from '@playwright/test';
+import { expect, test } from './helpers';
 
 test.describe('GET /api/v1/terms', () => {
 	test('d3 gives 2P 2D(2) 2F 2G 2H 4P 4F with Hund ground ⁴F₃/₂ (rigorous)', async ({ request }) => {

@@ -1,6 +1,5 @@
-import { expect, test } from '@playwright/test';
 import { readFileSync, writeFileSync } from 'node:fs';
-import { addEntry, createProject, newUser, shot } from './helpers';
+import { addEntry, createProject, expect, newUser, shot, test } from './helpers';
 
 test('an owner downloads a project backup and restores it as a new project; a damaged file is refused', async ({ browser }, info) => {
 	const { page } = await newUser(browser, 'Bea Backup', 'backup-owner');

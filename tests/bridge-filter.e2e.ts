@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { shot } from './helpers';
+import { expect, shot, test } from './helpers';
 
 /**
  * The Coupling bridge drawn for chosen J values, and its compact rows. 2p 3d has the LS levels

@@ -1,5 +1,5 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
-import { shot } from './helpers';
+import { type Locator, type Page } from '@playwright/test';
+import { expect, shot, test } from './helpers';
 
 /**
  * The Builder keeps the Energy solver's parameters between its tabs, and the Coupling bridge's computed curves

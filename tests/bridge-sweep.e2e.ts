@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { shot } from './helpers';
+import { expect, shot, test } from './helpers';
 
 /**
  * The Coupling bridge's computed curves: the engine's LS → jj sweep drawn for the Energy solver's starting

@@ -1,7 +1,7 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import { type Locator, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
-import { shot } from './helpers';
+import { expect, shot, test, waitForHydration } from './helpers';
 
 /*
  * Reference values for 3d5 4s:
@@ -173,7 +173,7 @@ test('the microstates themselves are listed only on request, a page at a time', 
 
 test('on a touch screen, taps add chips and step the occupancy (tablet width)', async ({ browser }) => {
 	const context = await browser.newContext({ hasTouch: true, isMobile: true, viewport: { width: 768, height: 1024 } });
-	const page = await context.newPage();
+	const page = waitForHydration(await context.newPage());
 	await page.goto('/builder');
 	await tray(page, '3d').tap();
 	await tray(page, '4s').tap();

@@ -1,7 +1,7 @@
-import { expect, test } from '@playwright/test';
 import Database from 'better-sqlite3';
 import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
+import { expect, test } from './helpers';
 
 /**
  * Crash safety: the built server on a scratch database gets a burst of writes (projects, Shelf

@@ -1,6 +1,6 @@
-import { expect, test, type Download, type Page } from '@playwright/test';
+import { type Download, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
-import { shot } from './helpers';
+import { expect, shot, test } from './helpers';
 
 /**
  * The Basis table page and the two pictures of the Builder (Level diagram, Coupling bridge).

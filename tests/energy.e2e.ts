@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { shot } from './helpers';
+import { expect, shot, test } from './helpers';
 
 /*
  * Reference values for 3d² with ζ = 0: ³F = A − 8B and ³P = A + 7B, so ³P lies 15B above ³F

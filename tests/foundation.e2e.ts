@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { PASSWORD, newUser, shot } from './helpers';
+import { expect, newUser, PASSWORD, shot, test } from './helpers';
 
 test('sign up, create a project, add to the Shelf; viewers cannot edit; strangers get 404; sign out', async ({ browser }) => {
 	const owner = await newUser(browser, 'Olga Owner', 'owner');

@@ -1,4 +1,4 @@
-import { expect, type Browser, type Page } from '@playwright/test';
+import { test as base, expect, type Browser, type Page } from '@playwright/test';
 import Database from 'better-sqlite3';
 import { mkdirSync } from 'node:fs';
 
@@ -8,6 +8,7 @@ export const PASSWORD = 'e2e-password-123';
 export const uniqueEmail = (who: string) => `${who}-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e6)}@e2e.example`;
 
 export async function signUp(page: Page, name: string, email: string) {
+	waitForHydration(page);
 	await page.goto('/signup');
 	await page.getByLabel('Name').fill(name);
 	await page.getByLabel('E-mail').fill(email);
@@ -22,6 +23,42 @@ export async function newUser(browser: Browser, name: string, who: string) {
 	const email = uniqueEmail(who);
 	await signUp(page, name, email);
 	return { context, page, email };
+}
+
+const patched = new WeakSet<Page>();
+
+/**
+ * From now on, page.goto and page.reload of an HTML page return only once the client has hydrated it
+ * (the root layout sets html[data-hydrated]). A select that submits on change, or a button with a
+ * click handler, does nothing before that, and a slow machine makes the gap long enough to lose a step.
+ */
+export function waitForHydration(page: Page): Page {
+	if (patched.has(page)) return page;
+	patched.add(page);
+	const settle = async <T extends Awaited<ReturnType<Page['goto']>>>(response: T): Promise<T> => {
+		if (response?.headers()['content-type']?.startsWith('text/html') && response.ok()) {
+			await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1, { timeout: 15_000 });
+		}
+		return response;
+	};
+	const goto = page.goto.bind(page);
+	const reload = page.reload.bind(page);
+	page.goto = async (url, options) => settle(await goto(url, options));
+	page.reload = async (options) => settle(await reload(options));
+	return page;
+}
+
+/** Playwright's test, with the page fixture waiting for hydration after each goto and reload. */
+export const test = base.extend({
+	page: async ({ page }, use) => {
+		await use(waitForHydration(page));
+	}
+});
+export { expect };
+
+/** Opens a page and waits until the client has hydrated it. */
+export async function gotoHydrated(page: Page, url: string) {
+	await waitForHydration(page).goto(url);
 }
 
 export async function shot(page: Page, name: string) {

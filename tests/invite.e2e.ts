@@ -1,5 +1,17 @@
-import { expect, test, type Page } from '@playwright/test';
-import { PASSWORD, addEntry, caughtMailTo, createProject, linkPath, newUser, shot, uniqueEmail } from './helpers';
+import { type Page } from '@playwright/test';
+import {
+	addEntry,
+	caughtMailTo,
+	createProject,
+	expect,
+	linkPath,
+	newUser,
+	PASSWORD,
+	shot,
+	test,
+	uniqueEmail,
+	waitForHydration
+} from './helpers';
 
 /**
  * Invitations and mail through the local SMTP catcher, in the built app: an owner invites a
@@ -47,7 +59,7 @@ test('an owner invites a colleague as viewer; the colleague signs up from the ma
 
 	// A new browser, nobody signed in: the page offers an account for the invited address (fixed).
 	const context = await browser.newContext();
-	const guest = await context.newPage();
+	const guest = waitForHydration(await context.newPage());
 	await guest.goto(link);
 	await expect(guest.getByTestId('invitation-offer')).toContainText(
 		`Olga Owner invites ${colleague} to the project “Invited nebula” as viewer`

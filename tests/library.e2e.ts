@@ -1,5 +1,5 @@
-import { expect, test, type Page } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { type Page } from '@playwright/test';
+import { expect, newUser, shot, test } from './helpers';
 
 /**
  * The Shelf as a library: filters (kept in the URL), "N of M", the empty result, tags edited in

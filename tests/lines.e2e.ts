@@ -1,8 +1,7 @@
 /**
  * Transition finder, air/vacuum and Line matcher routes, as scripts use them (no sign-in). Check values name their sources.
  */
-import { expect, test } from '@playwright/test';
-import { newUser } from './helpers';
+import { expect, newUser, test } from './helpers';
 
 test.describe('GET /api/v1/transitions', () => {
 	test('3s → 3p: ²S–²P° with strengths 4 : 2, i.e. 2 : 1 (Condon & Shortley 1935 ch. IX)', async ({ request }) => {

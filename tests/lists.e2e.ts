@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { expect, newUser, shot, test } from './helpers';
 import { DEMO_LEVEL_UPLOAD, DEMO_LINE_UPLOAD } from '../src/lib/lines/demo';
 
 /**

@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { addEntry, addMember, createProject, newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, expect, newUser, shot, test, waitForHydration } from './helpers';
 
 /*
  * Renaming, re-commenting and deleting a saved parameter set on a Shelf entry (product rules, common
@@ -53,7 +52,7 @@ test('an editor renames a saved set, a stale rename in a second tab is refused w
 	expect(fit.status(), await fit.text()).toBe(201);
 
 	// A second tab opens the entry while the set is still at version 1.
-	const second = await editor.context.newPage();
+	const second = waitForHydration(await editor.context.newPage());
 	await second.goto(entryUrl);
 	await expect(second.getByTestId('set-title')).toHaveText('start');
 

@@ -1,5 +1,5 @@
-import { expect, test, type Page } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { type Page } from '@playwright/test';
+import { expect, newUser, shot, test } from './helpers';
 import { INVENTED_3D2_OBSERVED } from './fixtures/invented-3d2';
 
 /*

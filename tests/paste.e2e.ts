@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { addMember, createProject, newUser, shot } from './helpers';
+import { addMember, createProject, expect, newUser, shot, test } from './helpers';
 
 /**
  * Pasting a column of observed energies on a Shelf entry: the preview says line by line where each

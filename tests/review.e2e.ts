@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { addEntry, addMember, createProject, newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, expect, newUser, shot, test } from './helpers';
 
 /**
  * Review of a level note in the built app: an editor proposes, the same editor is not offered

@@ -1,5 +1,5 @@
-import { expect, test, type Page } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { type Page } from '@playwright/test';
+import { expect, gotoHydrated, newUser, shot, test } from './helpers';
 
 /**
  * Rough edges found in use, at 1280 px and 768 px. Reference values: ²P₃/₂ has g_J = 4/3 with g_s = 2,
@@ -89,12 +89,21 @@ test('members page shows the role the server holds after it refuses a change; Sh
 	await page.getByRole('button', { name: 'Create project' }).click();
 	await expect(page.getByRole('heading', { name: 'Single owner' })).toBeVisible();
 	const projectId = page.url().split('/').pop()!;
-	await page.goto(`/projects/${projectId}/members`);
+	await gotoHydrated(page, `/projects/${projectId}/members`);
 	const select = page.getByLabel('Role of Olga Only');
 	await select.selectOption('viewer');
 	await expect(page.getByRole('alert')).toContainText('at least one owner');
 	await expect(page.getByLabel('Role of Olga Only')).toHaveValue('owner');
 	await shot(page, 'members-refused-role');
+	// Without scripts the select cannot submit itself, so each row has a Set button; the refusal reads the same.
+	const plain = await browser.newContext({ javaScriptEnabled: false, storageState: await context.storageState() });
+	const plainPage = await plain.newPage();
+	await plainPage.goto(`/projects/${projectId}/members`);
+	await plainPage.getByLabel('Role of Olga Only').selectOption('viewer');
+	await plainPage.getByRole('button', { name: 'Set' }).click();
+	await expect(plainPage.getByRole('alert')).toContainText('at least one owner');
+	await expect(plainPage.getByLabel('Role of Olga Only')).toHaveValue('owner');
+	await plain.close();
 
 	const created = await page.request.post(`/api/v1/projects/${projectId}/shelf`, {
 		data: { title: 'Fe II ground', species: 'Fe II', notation: '[Ar] 3d6 4s', tags: ['iron group', 'demo'] }

@@ -1,6 +1,6 @@
-import { expect, test, type Page } from '@playwright/test';
+import { type Page } from '@playwright/test';
 import { request as httpRequest } from 'node:http';
-import { PASSWORD, caughtMailTo, linkPath, newUser, shot } from './helpers';
+import { caughtMailTo, expect, linkPath, newUser, PASSWORD, shot, test, waitForHydration } from './helpers';
 
 /**
  * Account safety and hardening against the built server: redirects after sign-in, security
@@ -153,7 +153,7 @@ test('a password reset signs out other sessions and revokes API tokens, and the 
 
 	// The same person forgets the password in another browser.
 	const other = await browser.newContext();
-	const otherPage = await other.newPage();
+	const otherPage = waitForHydration(await other.newPage());
 	await otherPage.goto('/forgot');
 	await otherPage.getByLabel('E-mail').fill(email);
 	await otherPage.getByRole('button', { name: 'Send reset link' }).click();
@@ -180,7 +180,7 @@ test('a password reset signs out other sessions and revokes API tokens, and the 
 test('change password needs the current one; sign out everywhere ends the other sessions', async ({ browser }) => {
 	const { context, page, email } = await newUser(browser, 'Pia Password', 'change-pw');
 	const second = await browser.newContext();
-	const secondPage = await second.newPage();
+	const secondPage = waitForHydration(await second.newPage());
 	await secondPage.goto('/signin');
 	await secondPage.getByLabel('E-mail').fill(email);
 	await secondPage.getByLabel('Password').fill(PASSWORD);

@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { newUser, shot } from './helpers';
+import { expect, newUser, shot, test } from './helpers';
 
 /**
  * The Shelf never loses or bends a value, in the browser: energies as typed, the question before a

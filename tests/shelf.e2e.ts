@@ -1,5 +1,4 @@
-import { expect, test } from '@playwright/test';
-import { addEntry, addMember, createProject, newUser, shot } from './helpers';
+import { addEntry, addMember, createProject, expect, newUser, shot, test, waitForHydration } from './helpers';
 
 test('annotate a level on the Shelf, reload, export; viewers cannot annotate; stale notes are refused', async ({ browser }) => {
 	const owner = await newUser(browser, 'Ola Owner', 'shelf-owner');
@@ -80,7 +79,7 @@ test('annotate a level on the Shelf, reload, export; viewers cannot annotate; st
 	expect(put.status()).toBe(403);
 
 	// Two tabs of the owner: the second save from an old page is refused, not silently applied.
-	const second = await owner.context.newPage();
+	const second = waitForHydration(await owner.context.newPage());
 	await second.goto(entryUrl);
 	await page.goto(entryUrl);
 	await page.locator('tr[data-level="6D#1|9/2"]').getByRole('button', { name: 'Edit' }).click();
