@@ -62,6 +62,36 @@ test('the computed bridge opens its parameters in the Energy solver, and goes ba
 	await expect(solver.getByTestId('energy-preset')).toHaveValue('v3-3d2');
 });
 
+test('2p2 stretched: each t on its own scale opens the jj end, whose three groups lie 3ζ apart in all', async ({ page }) => {
+	// jj end of p²: −2ζ, −ζ/2, +ζ (Condon & Shortley 1935, ch. X), so the middle group sits half-way once stretched;
+	// on the common axis the three share 3ζ = 81 cm⁻¹ of the 15F2 = 25 500 cm⁻¹ LS spread (the C I starting set).
+	await page.setViewportSize({ width: 1280, height: 900 });
+	await page.goto('/builder?config=2p2');
+	await page.getByRole('tab', { name: 'Coupling bridge' }).click();
+	const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
+	await panel.getByRole('radio', { name: "Computed curves (from the Energy solver's parameters)" }).check();
+	await expect(panel.getByTestId('bridge-sweep-curve')).toHaveCount(5);
+	const stretch = panel.getByTestId('bridge-sweep-stretch');
+	await expect(stretch).toHaveAttribute('aria-pressed', 'false');
+	await expect(panel.getByText('One energy axis: the LS end spans')).toContainText('the jj end 81.0 cm⁻¹');
+	const jjEnds = async () =>
+		panel
+			.getByTestId('bridge-sweep-curve')
+			.evaluateAll((els) => els.map((e) => Number((e.getAttribute('points') ?? '').trim().split(/\s+/).at(-1)!.split(',')[1])));
+	const spanOf = (ys: number[]) => Math.max(...ys) - Math.min(...ys);
+	expect(spanOf(await jjEnds())).toBeLessThan(5);
+	await stretch.click();
+	await expect(stretch).toHaveAttribute('aria-pressed', 'true');
+	const ys = [...new Set((await jjEnds()).map((y) => y.toFixed(1)))].map(Number).sort((a, b) => a - b);
+	expect(ys).toHaveLength(3);
+	expect(ys[1] - ys[0]).toBeCloseTo(ys[2] - ys[1], 0);
+	expect(ys[2] - ys[0]).toBeGreaterThan(300);
+	await expect(panel.getByTestId('bridge-sweep-spread')).toHaveText(['spread 25 500 cm⁻¹', 'spread 81.0 cm⁻¹']);
+	await shot(page, 'bridge-sweep-stretched');
+	await stretch.click();
+	await expect(panel.getByTestId('bridge-sweep-spread')).toHaveCount(0);
+});
+
 test('a configuration too large for a sweep: the computed curves say so and offer the schematic', async ({ page }) => {
 	// 4f5 5d: C(14,5) × 10 = 20 020 determinants, over the 12 000 a sweep may take (the API's own message).
 	await page.setViewportSize({ width: 1280, height: 900 });

@@ -83,6 +83,43 @@ describe('sweep curve layout of 2p2', () => {
 	});
 });
 
+describe('stretched sweep of 2p2 (each t on its own scale)', () => {
+	const stretched = sweepLayout(sweep, null, box, { stretch: true });
+	const height = box.bottom - box.top;
+
+	it('puts the lowest level of every t at the bottom and the highest at the top, with no energy ticks', () => {
+		for (let k = 0; k < 61; k++) {
+			const ys = stretched.curves.map((c) => c.points[k].y);
+			expect(Math.max(...ys), `point ${k}`).toBeCloseTo(box.bottom, 6);
+			expect(Math.min(...ys), `point ${k}`).toBeCloseTo(box.top, 6);
+		}
+		expect(stretched.stretched).toBe(true);
+		expect(stretched.ticks).toEqual([]);
+	});
+
+	it('opens the jj end: −2ζ, −ζ/2, +ζ sit at the bottom, half-way and the top (Condon & Shortley 1935, ch. X)', () => {
+		const right = [...stretched.right].sort((a, b) => a.energy - b.energy);
+		expect(right.map((g) => (box.bottom - g.y) / height)).toEqual([0, 0.5, 1].map((v) => expect.closeTo(v, 9)));
+		// Unstretched, the same three groups share 3ζ = 81 cm⁻¹ of a 15F2 = 25 500 cm⁻¹ axis.
+		const plain = [...layout.right].sort((a, b) => a.energy - b.energy);
+		expect((plain[0].y - plain[2].y) / height).toBeLessThan(0.01);
+		expect(stretched.ends.jj.spread).toBeCloseTo(3 * zeta, 6);
+	});
+
+	it('keeps the order of the levels at every t, so curves of one J still do not cross (von Neumann & Wigner 1929)', () => {
+		for (const J of ['0', '1', '2']) {
+			const same = stretched.curves.filter((c) => c.J === J).sort((a, b) => a.rank - b.rank);
+			for (let r = 1; r < same.length; r++) for (let k = 0; k < 61; k++) expect(same[r].points[k].y).toBeLessThan(same[r - 1].points[k].y);
+		}
+	});
+
+	it('reads energies back per t: at the LS end ¹S − ³P = 15F2 as without stretch (Condon & Shortley 1935)', () => {
+		const byHeight = [...stretched.left].sort((a, b) => b.y - a.y);
+		expect(stretched.energyAt(byHeight[4].y, 0) - stretched.energyAt(byHeight[0].y, 0)).toBeCloseTo(15 * F2, 1);
+		expect(stretched.ends.ls.spread).toBeCloseTo(layout.ends.ls.spread, 9);
+	});
+});
+
 describe('sweep labels', () => {
 	it('write LS and jj labels with super- and subscripts', () => {
 		expect(sweepLsText('3P', '2', false)).toBe('³P₂');

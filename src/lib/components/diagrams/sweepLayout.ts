@@ -60,9 +60,14 @@ export interface SweepLayout extends SweepBox {
 	curves: SweepCurveLayout[];
 	left: SweepLabel[];
 	right: SweepLabel[];
+	/** Energy ticks of the common axis; none when stretched (each t has its own scale). */
 	ticks: { value: number; y: number }[];
-	/** The energy drawn at a height (the axis, inverted). */
-	energyAt: (y: number) => number;
+	/** The energy drawn at a height at the t of index `k` (the axis, inverted; without stretch the same for every k). */
+	energyAt: (y: number, k?: number) => number;
+	/** Whether each t was scaled to its own spread. */
+	stretched: boolean;
+	/** Lowest energy and spread (highest − lowest) of the drawn curves at the LS end and at the jj end, in cm⁻¹. */
+	ends: { ls: { low: number; spread: number }; jj: { low: number; spread: number } };
 }
 
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
@@ -125,20 +130,32 @@ export function sweepBox(levels: number, options: { width?: number; x0?: number;
  * drawn curves only, so a chosen J fills the picture.
  * @example sweepLayout(answer, null, sweepBox(answer.curves.length)).curves.length // one per level
  */
-export function sweepLayout(sweep: SweepInput, js: readonly string[] | null, box: SweepBox): SweepLayout {
+export function sweepLayout(
+	sweep: SweepInput,
+	js: readonly string[] | null,
+	box: SweepBox,
+	options: { stretch?: boolean } = {}
+): SweepLayout {
 	const chosen = js && js.length > 0 ? new Set(js) : null;
 	const shown = sweep.curves.filter((c) => !chosen || chosen.has(c.J));
-	const all = shown.flatMap((c) => c.energies);
-	const lo = all.length ? Math.min(...all) : 0;
-	const span = all.length ? Math.max(1e-9, Math.max(...all) - lo) : 1;
-	const y = (e: number) => box.bottom - ((box.bottom - box.top) * (e - lo)) / span;
-	const energyAt = (yy: number) => lo + ((box.bottom - yy) * span) / (box.bottom - box.top);
 	const n = sweep.t.length;
+	const rangeOf = (values: number[]) =>
+		values.length ? { low: Math.min(...values), spread: Math.max(...values) - Math.min(...values) } : { low: 0, spread: 0 };
+	const whole = rangeOf(shown.flatMap((c) => c.energies));
+	// Stretched, every t gets its own scale (its lowest level at the bottom, its highest at the top), so the
+	// jj end, squeezed to a few ζ beside Slater integrals of 10⁴ cm⁻¹, opens up as wide as the LS end.
+	const stretched = options.stretch === true;
+	const scales = Array.from({ length: n }, (_, k) => (stretched ? rangeOf(shown.map((c) => c.energies[k])) : whole));
+	const spanOf = (k: number) => Math.max(1e-9, scales[k].spread);
+	const y = (e: number, k = 0) => box.bottom - ((box.bottom - box.top) * (e - scales[k].low)) / spanOf(k);
+	const energyAt = (yy: number, k = 0) => scales[k].low + ((box.bottom - yy) * spanOf(k)) / (box.bottom - box.top);
+	const lo = whole.low;
+	const span = Math.max(1e-9, whole.spread);
 	const x = (t: number) => box.x0 + (box.x1 - box.x0) * t;
 	const odd = sweep.parity === 'odd';
 
 	const curves: SweepCurveLayout[] = shown.map((c) => {
-		const points = c.energies.map((e, k) => ({ x: x(sweep.t[k] ?? k / Math.max(1, n - 1)), y: y(e) }));
+		const points = c.energies.map((e, k) => ({ x: x(sweep.t[k] ?? k / Math.max(1, n - 1)), y: y(e, k) }));
 		return {
 			key: `${c.twoJ}:${c.rank}`,
 			J: c.J,
@@ -179,19 +196,22 @@ export function sweepLayout(sweep: SweepInput, js: readonly string[] | null, box
 		} else groups.set(key, { text: curves[i].jjText, energy: e, J: [c.J], count: 1 });
 	});
 	const list = [...groups.values()].filter((g) => g.text !== '');
+	const last = n - 1;
 	const rightY = spreadLabels(
-		list.map((g) => y(g.energy)),
+		list.map((g) => y(g.energy, last)),
 		box.labelGap,
 		box.top - box.labelGap
 	);
-	const right: SweepLabel[] = list.map((g, i) => ({ ...g, y: y(g.energy), labelY: rightY[i] }));
+	const right: SweepLabel[] = list.map((g, i) => ({ ...g, y: y(g.energy, last), labelY: rightY[i] }));
 
-	const step = tickStep(span, 5);
 	const ticks: { value: number; y: number }[] = [];
-	for (let v = Math.ceil(lo / step) * step; v <= lo + span + step / 1e6; v += step)
-		ticks.push({ value: Number(v.toPrecision(12)), y: y(v) });
-
-	return { ...box, curves, left, right, ticks, energyAt };
+	if (!stretched) {
+		const step = tickStep(span, 5);
+		for (let v = Math.ceil(lo / step) * step; v <= lo + span + step / 1e6; v += step)
+			ticks.push({ value: Number(v.toPrecision(12)), y: y(v) });
+	}
+	const ends = { ls: rangeOf(shown.map((c) => c.energies[0])), jj: rangeOf(shown.map((c) => c.energies[last])) };
+	return { ...box, curves, left, right, ticks, energyAt, stretched, ends };
 }
 
 /** Colour and dash of the curves of the i-th J value (in increasing J), the same in the picture and in the J filter's swatches. */
