@@ -101,6 +101,12 @@ test('a configuration too large for a sweep: the computed curves say so and offe
 	// The bridge's own limit and message stay: too many levels to draw until a J is chosen (the bridge takes seconds here).
 	test.setTimeout(120_000);
 	await expect(panel.getByTestId('bridge-too-many')).toBeVisible({ timeout: 60_000 });
+	// Its table of links comes a page (200, the picture's limit) at a time, not all of its levels at once.
+	const linkRows = panel.getByTestId('bridge-table').locator('tbody tr');
+	await expect(linkRows).toHaveCount(200);
+	await expect(panel.getByTestId('bridge-table-shown')).toHaveText(/^200 of \d{4} links shown$/);
+	await panel.getByTestId('bridge-table-more').click();
+	await expect(linkRows).toHaveCount(400);
 	await panel
 		.getByTestId('bridge-filter')
 		.getByRole('button', { name: /^J = 0 / })
