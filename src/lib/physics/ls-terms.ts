@@ -138,25 +138,55 @@ export function rowsOfH(m: ParameterMatrices): RowsOfH {
 	return out;
 }
 
-function applyTo(H: RowsOfH, u: SparseVector, out: Float64Array[], only: Uint8Array): void {
+/** The entries of H that belong to the parameters `only` marks (the Coulomb or the spin–orbit ones), as rows again. */
+function rowsOnly(H: RowsOfH, only: Uint8Array): RowsOfH {
+	const n = H.start.length - 1;
+	const start = new Int32Array(n + 1);
+	for (let i = 0; i < n; i++) {
+		let c = 0;
+		for (let k = H.start[i]; k < H.start[i + 1]; k++) c += only[H.param[k]];
+		start[i + 1] = start[i] + c;
+	}
+	const out: RowsOfH = { start, col: new Int32Array(start[n]), coef: new Float64Array(start[n]), param: new Int32Array(start[n]) };
+	let at = 0;
+	for (let k = 0; k < H.col.length; k++)
+		if (only[H.param[k]]) {
+			out.col[at] = H.col[k];
+			out.coef[at] = H.coef[k];
+			out.param[at++] = H.param[k];
+		}
+	return out;
+}
+
+/**
+ * H u added into `w`, one interleaved buffer: w[col · np + p] holds parameter p's matrix times u at
+ * row col, so a later dot product reads all parameters of a row from one place in memory.
+ */
+function applyTo(H: RowsOfH, u: SparseVector, w: Float64Array, np: number): void {
 	for (let t = 0; t < u.pos.length; t++) {
 		const i = u.pos[t];
 		const v = u.val[t];
-		for (let k = H.start[i]; k < H.start[i + 1]; k++) if (only[H.param[k]]) out[H.param[k]][H.col[k]] += H.coef[k] * v;
+		for (let k = H.start[i]; k < H.start[i + 1]; k++) w[H.col[k] * np + H.param[k]] += H.coef[k] * v;
 	}
 }
 
-function clear(H: RowsOfH, u: SparseVector, out: Float64Array[]): void {
+function clear(H: RowsOfH, u: SparseVector, w: Float64Array, np: number): void {
 	for (let t = 0; t < u.pos.length; t++) {
 		const i = u.pos[t];
-		for (let k = H.start[i]; k < H.start[i + 1]; k++) out[H.param[k]][H.col[k]] = 0;
+		for (let k = H.start[i]; k < H.start[i + 1]; k++) w[H.col[k] * np + H.param[k]] = 0;
 	}
 }
 
-function dot(u: SparseVector, w: Float64Array): number {
-	let s = 0;
-	for (let t = 0; t < u.pos.length; t++) s += u.val[t] * w[u.pos[t]];
-	return s;
+/** ⟨u| H_p |·⟩ for every parameter p in `params`, divided by `scale`: one pass over u for all of them. */
+function dots(u: SparseVector, w: Float64Array, np: number, params: Int32Array, scale: number): Float64Array {
+	const values = new Float64Array(np);
+	for (let t = 0; t < u.pos.length; t++) {
+		const base = u.pos[t] * np;
+		const v = u.val[t];
+		for (let q = 0; q < params.length; q++) values[params[q]] += v * w[base + params[q]];
+	}
+	if (scale !== 1) for (let q = 0; q < params.length; q++) values[params[q]] /= scale;
+	return values;
 }
 
 /** Memo of the float 3j and Clebsch–Gordan values (the exact ones are costly and few keys recur). */
@@ -216,7 +246,11 @@ export function termJSpaces(block: DeterminantBlock, H: RowsOfH, terms: readonly
 	const coulombOnly = Uint8Array.from(spinOrbit, (z) => (z ? 0 : 1));
 	const zetaOnly = Uint8Array.from(spinOrbit, (z) => (z ? 1 : 0));
 	const hasZeta = spinOrbit.some((z) => z);
-	const w = Array.from({ length: np }, () => new Float64Array(n));
+	const w = new Float64Array(n * np);
+	const Hc = rowsOnly(H, coulombOnly);
+	const Hz = rowsOnly(H, zetaOnly);
+	const coulombParams = Int32Array.from(spinOrbit.flatMap((z, p) => (z ? [] : [p])));
+	const zetaParams = Int32Array.from(spinOrbit.flatMap((z, p) => (z ? [p] : [])));
 	const factor = memo(spinOrbitFactorOf);
 	const cg = memo(clebschGordanFloat);
 
@@ -239,14 +273,9 @@ export function termJSpaces(block: DeterminantBlock, H: RowsOfH, terms: readonly
 		for (let i = 1; i < states.length; i++) if (pieceSize.get(ML0 + i)! < pieceSize.get(ML0 + at)!) at = i;
 		for (const t2 of group) {
 			const u2 = terms[t2].states[at];
-			applyTo(H, u2, w, coulombOnly);
-			for (const t1 of group) {
-				if (t1 > t2) continue;
-				const values = new Float64Array(np);
-				for (let p = 0; p < np; p++) if (coulombOnly[p]) values[p] = dot(terms[t1].states[at], w[p]);
-				coulomb.set(t1 * T + t2, values);
-			}
-			clear(H, u2, w);
+			applyTo(Hc, u2, w, np);
+			for (const t1 of group) if (t1 <= t2) coulomb.set(t1 * T + t2, dots(terms[t1].states[at], w, np, coulombParams, 1));
+			clear(Hc, u2, w, np);
 		}
 	}
 
@@ -278,20 +307,24 @@ export function termJSpaces(block: DeterminantBlock, H: RowsOfH, terms: readonly
 	if (hasZeta) {
 		for (let t2 = 0; t2 < T; t2++) {
 			const b = terms[t2];
-			// H_ζ on every state of term t2 (one dense vector per piece and parameter), made once.
-			const perPiece = b.states.map((u) => {
-				const out = Array.from({ length: np }, (_, p) => (zetaOnly[p] ? new Float64Array(n) : new Float64Array(0)));
-				applyTo(H, u, out, zetaOnly);
-				return out;
-			});
+			// The partners t1 ≤ t2, grouped by the state j of t2 their element is read from: H_ζ is applied
+			// once per such state, into the one reused buffer `w` (4f⁷ 5d has ~10⁴ term states, and a dense
+			// vector for each of them was most of the structure's build time).
+			const byState = new Map<number, { t1: number; i: number; best: number }[]>();
 			for (let t1 = 0; t1 <= t2; t1++) {
 				const a = terms[t1];
 				if (Math.abs(a.twoS - b.twoS) > 2 || Math.abs(a.L - b.L) > 1) continue;
 				const { best, i, j } = bestComponent(a, b);
 				if (best === 0) continue;
-				const values = new Float64Array(np);
-				for (let p = 0; p < np; p++) if (zetaOnly[p]) values[p] = dot(a.states[i], perPiece[j][p]) / best;
-				reduced.set(t1 * T + t2, values);
+				const list = byState.get(j);
+				if (list) list.push({ t1, i, best });
+				else byState.set(j, [{ t1, i, best }]);
+			}
+			for (const [j, partners] of byState) {
+				const u = b.states[j];
+				applyTo(Hz, u, w, np);
+				for (const { t1, i, best } of partners) reduced.set(t1 * T + t2, dots(terms[t1].states[i], w, np, zetaParams, best));
+				clear(Hz, u, w, np);
 			}
 		}
 	}
