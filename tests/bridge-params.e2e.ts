@@ -111,3 +111,21 @@ test('a computed curve highlights under the pointer or keyboard focus, shows its
 	// The text alternative stays: one row per curve.
 	await expect(panel.getByTestId('bridge-sweep-table').locator('tbody tr')).toHaveCount(5);
 });
+
+test('[Xe] 4f2 5d: the computed bridge keeps the core as typed in its title and says the Energy solver’s scaling', async ({ page }) => {
+	// 4f² 5d: C(14,2) × 10 = 910 determinants; [Xe] is closed, so it adds no parameters (a fact of the Slater–Condon rules).
+	await page.setViewportSize({ width: 1280, height: 900 });
+	await page.goto('/builder?config=' + encodeURIComponent('[Xe] 4f2 5d'));
+	await page.getByRole('tab', { name: 'Energy solver' }).click();
+	const solver = page.getByRole('tabpanel', { name: 'Energy solver' });
+	await solver.getByTestId('energy-scale').fill('85');
+	await page.getByRole('tab', { name: 'Coupling bridge' }).click();
+	const panel = page.getByRole('tabpanel', { name: 'Coupling bridge' });
+	await panel.getByRole('radio', { name: COMPUTED }).check();
+	await expect(panel.getByTestId('bridge-sweep-svg')).toHaveAttribute(
+		'aria-label',
+		/^\[Xe\] 4f² 5d — Coupling bridge, computed curves, even parity/
+	);
+	await expect(panel.getByTestId('bridge-sweep-parameters')).toContainText('E_av = 0 (Fᵏ, Gᵏ scaled to 85 %).');
+	await expect(panel.getByTestId('bridge-sweep-origin')).toHaveText('as edited in the Energy solver');
+});

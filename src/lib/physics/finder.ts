@@ -197,7 +197,7 @@ export function transitionFinder(
 	const jump = within ? null : electronJump(lowerCfg, upperCfg);
 	const side = (cfg: Configuration, terms: FinderTerm[]) => ({
 		notation: formatConfiguration(cfg),
-		pretty: formatConfiguration(cfg, { superscripts: true }),
+		pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
 		parity: cfg.parity,
 		terms
 	});

@@ -167,7 +167,7 @@ export function termSheet(cfg: Configuration, options: TermSheetOptions = {}): T
 	return {
 		configuration: {
 			notation: formatConfiguration(cfg),
-			pretty: formatConfiguration(cfg, { superscripts: true }),
+			pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
 			electrons: cfg.electrons,
 			parity: cfg.parity,
 			core: cfg.core,

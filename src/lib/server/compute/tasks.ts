@@ -112,7 +112,11 @@ const bridge: ComputeTask<{ config: string; zeta?: string }> = {
 			);
 		const b = couplingBridge(cfg, parseZetaList(zeta ?? ''));
 		return {
-			configuration: { notation: formatConfiguration(cfg), pretty: formatConfiguration(cfg, { superscripts: true }), parity: cfg.parity },
+			configuration: {
+				notation: formatConfiguration(cfg),
+				pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
+				parity: cfg.parity
+			},
 			schematic: true,
 			ls: b.ls.map((x) => ({ label: x.label, J: halfString(x.twoJ) })),
 			jj: b.jj.map((x) => ({

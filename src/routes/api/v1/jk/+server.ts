@@ -16,7 +16,7 @@ export const GET: RequestHandler = api((event) => {
 	return reply('GET /api/v1/jk', {
 		configuration: {
 			notation: formatConfiguration(cfg),
-			pretty: formatConfiguration(cfg, { superscripts: true }),
+			pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
 			parity: cfg.parity,
 			core: formatConfiguration(
 				core.filter((s) => s.occupancy < 4 * s.l + 2),
