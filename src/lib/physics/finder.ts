@@ -9,7 +9,7 @@
  * Cowan 1981 ch. 14), so E1 between configurations that differ otherwise is flagged.
  */
 import type { Configuration, Term } from './types';
-import { parseConfiguration, formatConfiguration } from './parse';
+import { parseConfiguration, displayConfiguration, formatConfiguration } from './parse';
 import { termsOf } from './terms';
 import { lLetter } from './letters';
 import { halfString } from './half';
@@ -197,7 +197,7 @@ export function transitionFinder(
 	const jump = within ? null : electronJump(lowerCfg, upperCfg);
 	const side = (cfg: Configuration, terms: FinderTerm[]) => ({
 		notation: formatConfiguration(cfg),
-		pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
+		pretty: displayConfiguration(cfg),
 		parity: cfg.parity,
 		terms
 	});

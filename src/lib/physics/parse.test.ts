@@ -6,6 +6,7 @@ import {
 	NOBLE_GAS_CORES,
 	asSubshells,
 	configurationOf,
+	displayConfiguration,
 	formatConfiguration,
 	largestCore,
 	openSubshells,
@@ -206,6 +207,12 @@ describe('writing configurations', () => {
 		expect(formatConfiguration(parseConfiguration('1s2 2s2 2p5 3s'), { compactCore: true })).toBe('[He] 2s2 2p5 3s');
 		expect(formatConfiguration(parseConfiguration('2p5 3p'), { compactCore: true })).toBe('2p5 3p');
 		expect(largestCore(parseConfiguration('[Xe] 4f7 6s2').subshells)).toBe('Xe');
+	});
+
+	it('display form keeps a typed core and spells out an untyped one: [Xe] 4f² 5d, 1s² 2s² 2p⁶ 3s', () => {
+		// [Xe] = 1s² … 5p⁶, 54 electrons (the noble-gas core shorthand; common practice, no source).
+		expect(displayConfiguration(parseConfiguration('[Xe] 4f2 5d'))).toBe('[Xe] 4f² 5d');
+		expect(displayConfiguration(parseConfiguration('1s2 2s2 2p6 3s'))).toBe('1s² 2s² 2p⁶ 3s');
 	});
 
 	it('superscripts: 3d⁵ 4s', () => {

@@ -465,3 +465,12 @@ export function formatConfiguration(cfg: Configuration | readonly Subshell[], op
 	for (const s of rest) parts.push(subshellLabel(s, options.superscripts ?? false));
 	return parts.join(' ');
 }
+
+/**
+ * The configuration as shown to people: superscript occupancies, and a noble-gas core written as
+ * [Xe] when the user typed one (else every subshell spelled out, as typed).
+ * @example displayConfiguration(parseConfiguration('[Xe] 4f2 5d')) // '[Xe] 4f² 5d'
+ */
+export function displayConfiguration(cfg: Pick<Configuration, 'subshells' | 'core'>): string {
+	return formatConfiguration(cfg.subshells, { superscripts: true, compactCore: cfg.core !== null });
+}

@@ -11,7 +11,7 @@
 import type { Configuration } from './types';
 import { halfString } from './half';
 import { termLetter } from './letters';
-import { formatConfiguration, subshellLabel } from './parse';
+import { displayConfiguration, formatConfiguration, subshellLabel } from './parse';
 import { countAt, microstateGrid, microstateTotal, type MicrostateGrid } from './microstates';
 import { levelsOf, statisticalWeight, termLabel, termsOf } from './terms';
 import { fractionString, GS_FREE_ELECTRON, landeG } from './lande';
@@ -167,7 +167,7 @@ export function termSheet(cfg: Configuration, options: TermSheetOptions = {}): T
 	return {
 		configuration: {
 			notation: formatConfiguration(cfg),
-			pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
+			pretty: displayConfiguration(cfg),
 			electrons: cfg.electrons,
 			parity: cfg.parity,
 			core: cfg.core,

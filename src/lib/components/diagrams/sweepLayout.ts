@@ -139,18 +139,22 @@ export function sweepLayout(
 	const chosen = js && js.length > 0 ? new Set(js) : null;
 	const shown = sweep.curves.filter((c) => !chosen || chosen.has(c.J));
 	const n = sweep.t.length;
-	const rangeOf = (values: number[]) =>
-		values.length ? { low: Math.min(...values), spread: Math.max(...values) - Math.min(...values) } : { low: 0, spread: 0 };
+	const rangeOf = (values: number[]) => {
+		if (values.length === 0) return { low: 0, spread: 0 };
+		const low = Math.min(...values);
+		return { low, spread: Math.max(...values) - low };
+	};
+	const atT = (k: number) => rangeOf(shown.map((c) => c.energies[k]));
+	const last = n - 1;
 	const whole = rangeOf(shown.flatMap((c) => c.energies));
 	// Stretched, every t gets its own scale (its lowest level at the bottom, its highest at the top), so the
 	// jj end, squeezed to a few ζ beside Slater integrals of 10⁴ cm⁻¹, opens up as wide as the LS end.
 	const stretched = options.stretch === true;
-	const scales = Array.from({ length: n }, (_, k) => (stretched ? rangeOf(shown.map((c) => c.energies[k])) : whole));
+	const scales = Array.from({ length: n }, (_, k) => (stretched ? atT(k) : whole));
+	const ends = stretched ? { ls: scales[0], jj: scales[last] } : { ls: atT(0), jj: atT(last) };
 	const spanOf = (k: number) => Math.max(1e-9, scales[k].spread);
 	const y = (e: number, k = 0) => box.bottom - ((box.bottom - box.top) * (e - scales[k].low)) / spanOf(k);
 	const energyAt = (yy: number, k = 0) => scales[k].low + ((box.bottom - yy) * spanOf(k)) / (box.bottom - box.top);
-	const lo = whole.low;
-	const span = Math.max(1e-9, whole.spread);
 	const x = (t: number) => box.x0 + (box.x1 - box.x0) * t;
 	const odd = sweep.parity === 'odd';
 
@@ -196,7 +200,6 @@ export function sweepLayout(
 		} else groups.set(key, { text: curves[i].jjText, energy: e, J: [c.J], count: 1 });
 	});
 	const list = [...groups.values()].filter((g) => g.text !== '');
-	const last = n - 1;
 	const rightY = spreadLabels(
 		list.map((g) => y(g.energy, last)),
 		box.labelGap,
@@ -206,11 +209,11 @@ export function sweepLayout(
 
 	const ticks: { value: number; y: number }[] = [];
 	if (!stretched) {
+		const span = spanOf(0);
 		const step = tickStep(span, 5);
-		for (let v = Math.ceil(lo / step) * step; v <= lo + span + step / 1e6; v += step)
+		for (let v = Math.ceil(whole.low / step) * step; v <= whole.low + span + step / 1e6; v += step)
 			ticks.push({ value: Number(v.toPrecision(12)), y: y(v) });
 	}
-	const ends = { ls: rangeOf(shown.map((c) => c.energies[0])), jj: rangeOf(shown.map((c) => c.energies[last])) };
 	return { ...box, curves, left, right, ticks, energyAt, stretched, ends };
 }
 

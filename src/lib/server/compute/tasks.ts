@@ -14,7 +14,7 @@
 import type { ApiResponses } from '../../api/types';
 import { RecentMap } from '../recent';
 import { termSheet } from '../../physics/report';
-import { formatConfiguration, parseConfiguration, openSubshells } from '../../physics/parse';
+import { displayConfiguration, formatConfiguration, parseConfiguration, openSubshells } from '../../physics/parse';
 import { jjLevels, jjLevelCountsByJ, assertLsJjAgree, MAX_JJ_LEVELS } from '../../physics/jj';
 import { levelCountsByJ } from '../../physics/terms';
 import { halfString } from '../../physics/half';
@@ -114,7 +114,7 @@ const bridge: ComputeTask<{ config: string; zeta?: string }> = {
 		return {
 			configuration: {
 				notation: formatConfiguration(cfg),
-				pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
+				pretty: displayConfiguration(cfg),
 				parity: cfg.parity
 			},
 			schematic: true,

@@ -1,5 +1,5 @@
 import type { RequestHandler } from './$types';
-import { formatConfiguration, parseConfiguration, subshellLabel } from '$lib/physics/parse';
+import { displayConfiguration, formatConfiguration, parseConfiguration, subshellLabel } from '$lib/physics/parse';
 import { jkLevelCountsByJ, jkLevels, jkSplit } from '$lib/physics/jk';
 import { halfString } from '$lib/physics/half';
 import { api, queryParam, reply } from '$lib/server/http';
@@ -16,7 +16,7 @@ export const GET: RequestHandler = api((event) => {
 	return reply('GET /api/v1/jk', {
 		configuration: {
 			notation: formatConfiguration(cfg),
-			pretty: formatConfiguration(cfg, { superscripts: true, compactCore: cfg.core !== null }),
+			pretty: displayConfiguration(cfg),
 			parity: cfg.parity,
 			core: formatConfiguration(
 				core.filter((s) => s.occupancy < 4 * s.l + 2),
