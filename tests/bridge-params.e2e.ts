@@ -113,7 +113,8 @@ test('a computed curve highlights under the pointer or keyboard focus, shows its
 });
 
 test('[Xe] 4f2 5d: the computed bridge keeps the core as typed in its title and says the Energy solver’s scaling', async ({ page }) => {
-	// 4f² 5d: C(14,2) × 10 = 910 determinants; [Xe] is closed, so it adds no parameters (a fact of the Slater–Condon rules).
+	// 4f² 5d: C(14,2) × 10 = 910 determinants; [Xe] is closed, so it adds no parameters (a fact of the Slater–Condon rules);
+	// parity (−1)^Σl = (−1)^(3+3+2), even (a general fact of the field).
 	await page.setViewportSize({ width: 1280, height: 900 });
 	await page.goto('/builder?config=' + encodeURIComponent('[Xe] 4f2 5d'));
 	await page.getByRole('tab', { name: 'Energy solver' }).click();

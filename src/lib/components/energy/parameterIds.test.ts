@@ -8,7 +8,7 @@ describe('the parameter ids the page works out agree with the engine’s answer'
 		expect(solverParameterIds(text)).toEqual({ config: answer.config, ids: answer.parameters.map((p) => p.id) });
 	});
 
-	it('names F², F⁴ and ζ for d² (Cowan 1981, §13-1), and G¹ but no F between p and s (k ≤ 2·min(l, l′) = 0)', () => {
+	it('names F², F⁴ and ζ for d² (Cowan 1981, ch. 13 — chapter from memory), and G¹ but no F between p and s (k ≤ 2·min(l, l′) = 0)', () => {
 		expect(solverParameterIds('3d2')?.ids).toEqual(['F2(3d,3d)', 'F4(3d,3d)', 'zeta(3d)']);
 		expect(solverParameterIds('2p 3s')?.ids).toEqual(['zeta(2p)', 'G1(2p,3s)']);
 	});
